@@ -1,0 +1,33 @@
+#!/usr/bin/env bash
+# Runs every test of TrussWeb on a fresh machine: installs what is missing, builds, runs the suites,
+# and checks that the app starts and answers on loopback. Exit code 0 only when all pass.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+export DOTNET_CLI_TELEMETRY_OPTOUT=1 DOTNET_NOLOGO=1 DOTNET_SKIP_FIRST_TIME_EXPERIENCE=1
+start=$(date +%s)
+
+echo "== build (Release)"
+dotnet build TrussWeb.sln -c Release -nologo -v quiet
+
+echo "== unit tests"
+for project in tests/TrussWeb.Core.Tests; do
+  dotnet test "$project" -c Release --no-build -nologo --logger "console;verbosity=minimal"
+done
+
+echo "== smoke: the app starts and answers on loopback"
+port=$(shuf -i 20000-59999 -n 1)
+log=$(mktemp)
+dotnet src/TrussWeb.Web/bin/Release/net10.0/TrussWeb.Web.dll --urls "http://127.0.0.1:$port" >"$log" 2>&1 &
+app=$!
+trap 'kill $app 2>/dev/null || true' EXIT
+ok=""
+for _ in $(seq 1 60); do
+  if curl -fsS "http://127.0.0.1:$port/" -o /dev/null 2>/dev/null; then ok=1; break; fi
+  sleep 1
+done
+if [ -z "$ok" ]; then echo "the app did not answer on port $port"; cat "$log"; exit 1; fi
+curl -fsS "http://127.0.0.1:$port/" | grep -q "competent engineer" || { echo "home page lacks the caution text"; exit 1; }
+kill $app; wait $app 2>/dev/null || true
+echo "smoke passed"
+
+echo "== all tests passed in $(( $(date +%s) - start )) s"
