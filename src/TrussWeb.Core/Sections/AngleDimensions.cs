@@ -61,6 +61,9 @@ public sealed record AngleDimensions(double LongLeg, double ShortLeg, double Thi
         return issues;
     }
 
+    /// <summary>True when <see cref="Validate"/> finds nothing (for forms that pre-check input).</summary>
+    public bool IsValid() => Validate().Count == 0;
+
     /// <inheritdoc />
     public SectionProperties Compute(string? designation = null) => Angle.Compute(this, designation);
 

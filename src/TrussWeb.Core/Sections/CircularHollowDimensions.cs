@@ -25,6 +25,9 @@ public sealed record CircularHollowDimensions(double Diameter, double Thickness)
         return issues;
     }
 
+    /// <summary>True when <see cref="Validate"/> finds nothing (for forms that pre-check input).</summary>
+    public bool IsValid() => Validate().Count == 0;
+
     /// <inheritdoc />
     public SectionProperties Compute(string? designation = null) => CircularHollow.Compute(this, designation);
 

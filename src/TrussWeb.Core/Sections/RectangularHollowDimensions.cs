@@ -95,6 +95,9 @@ public sealed record RectangularHollowDimensions(double Depth, double Width, dou
         return issues;
     }
 
+    /// <summary>True when <see cref="Validate"/> finds nothing (for forms that pre-check input).</summary>
+    public bool IsValid() => Validate().Count == 0;
+
     /// <inheritdoc />
     public SectionProperties Compute(string? designation = null) => RectangularHollow.Compute(this, designation);
 

@@ -13,6 +13,7 @@ public class AngleValidationTests
     public void Valid_dimensions_have_no_issues()
     {
         Assert.Empty(Valid.Validate());
+        Assert.True(Valid.IsValid());
         Assert.True(Angle.TryCompute(Valid, out var p, out var issues));
         Assert.NotNull(p);
         Assert.Empty(issues);
@@ -101,6 +102,7 @@ public class AngleValidationTests
     {
         var bad = Valid with { Thickness = -1, ToeRadius = -1 };
 
+        Assert.False(bad.IsValid());
         var ex = Assert.Throws<InputValidationException>(() => Angle.Compute(bad));
         Assert.Equal(2, ex.Issues.Count);
         Assert.False(Angle.TryCompute(bad, out var p, out var issues));

@@ -70,6 +70,9 @@ public class HollowSectionValidationTests
     public void Valid_hollow_sections_have_no_issues()
     {
         Assert.Empty(new CircularHollowDimensions(114.3, 3.6).Validate());
+        Assert.True(new CircularHollowDimensions(114.3, 3.6).IsValid());
+        Assert.False(new CircularHollowDimensions(114.3, 60).IsValid());
+        Assert.False(new RectangularHollowDimensions(100, 40, 8).IsValid());
         Assert.Empty(new RectangularHollowDimensions(200, 100, 8).Validate());
         Assert.True(RectangularHollow.TryCompute(new RectangularHollowDimensions(200, 100, 8), out var p, out var issues));
         Assert.NotNull(p);
