@@ -106,6 +106,7 @@ public class AngleIdentityTests
         AssertClose.Relative(140 * 1000 / 3.0, p.J, RoundOff, "J");
         AssertClose.Relative(1000 / 36.0 * (95.0 * 95 * 95 + 45.0 * 45 * 45), p.Cw, RoundOff, "Cw");
         AssertClose.Relative(p.Ix / (100 - p.CentroidY), p.Sx, RoundOff, "Sx at the toe of the long leg");
+        AssertClose.Relative(p.Iy / (50 - p.CentroidX), p.Sy, RoundOff, "Sy at the toe of the short leg");
         Assert.Equal(SymmetryKind.Asymmetric, p.Symmetry);
         Assert.Collection(p.Elements,
             e => Assert.Equal((ElementKind.AngleLeg, 100.0, 90.0, 1), (e.Kind, e.Width, e.AreaWidth, e.Count)),

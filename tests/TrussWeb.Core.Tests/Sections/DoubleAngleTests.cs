@@ -101,6 +101,9 @@ public class DoubleAngleTests
         AssertClose.Relative(2 * (iNormal + one.Area * Math.Pow(e1 + gap / 2, 2)), p.Iy, RoundOff, "Iy");
         AssertClose.Relative(8 / 2.0 - f1, p.Y0, RoundOff, "Y0 at the midline of the outstanding legs");
         AssertClose.Relative(2 * one.J, p.J, RoundOff, "J");
+        var (backLeg, outstand) = shortBack ? (75.0, 100.0) : (100.0, 75.0);
+        AssertClose.Relative(p.Ix / Math.Max(f1, backLeg - f1), p.Sx, RoundOff, "Sx at the farther extreme fibre");
+        AssertClose.Relative(p.Iy / (outstand + gap / 2), p.Sy, RoundOff, "Sy at the outer toes");
         AssertClose.Relative(2 * one.MassPerMetre, p.MassPerMetre, RoundOff, "mass");
         Assert.Equal((0.0, 0.0, 0.0, 0.0), (p.X0, p.U0, p.Alpha, p.Cw));
         Assert.Equal((p.Ix, p.Iy, p.Y0), (p.Iu, p.Iv, p.V0));
