@@ -113,7 +113,12 @@ public static class Classification
         return new SectionClassification(list, worst, section.Area, worst == 4 ? ae : section.Area, inScope);
     }
 
-    /// <summary>The classification as a check: demand = worst ratio / its limit (utilization), class 4 is a Pass with its effective area (the resistance check uses Ae).</summary>
+    /// <summary>
+    /// The classification as an informative check: demand = the worst ratio over its class 3 limit,
+    /// resistance = 1. Its utilization is reported as 0 because the class is not a resistance: a class 4
+    /// section is handled by the effective area in the compressive resistance, which then governs. Status
+    /// is Pass, or OutOfScope when a class 4 element has no effective area rule.
+    /// </summary>
     public static CheckResult Check(SectionClassification classification, CalcRecord? record)
     {
         ArgumentNullException.ThrowIfNull(classification);

@@ -262,6 +262,11 @@ public sealed class Sans10162Standard : IDesignStandard
             }
         }
 
+        if (s.Symmetry == SymmetryKind.Singly && s.Family != SectionFamily.Angle && s.X0 != 0)
+        {
+            issues.Add(new ValidationIssue("Section.X0", $"a singly symmetric section has its axis of symmetry on y-y, so the shear centre lies on it: x0 must be 0 mm (got {F(s.X0)} mm)"));
+        }
+
         if (s.Family == SectionFamily.DoubleAngle && s.Component is null)
         {
             issues.Add(new ValidationIssue("Section.Component", "a double angle needs the properties of one angle (component)"));

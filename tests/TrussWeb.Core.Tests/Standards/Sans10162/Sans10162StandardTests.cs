@@ -32,6 +32,8 @@ public class Sans10162StandardTests
         { "weld length", "Connection.WeldLength", "must be greater than 0 mm (got 0 mm)" },
         { "negative count", "Connectors.IntermediateCount", "must not be negative (got -1)" },
         { "exponent", "CompressionExponent", "must be greater than 0" },
+        { "shear centre off the symmetry axis", "Section.X0", "x0 must be 0 mm (got 3 mm)" },
+        { "no component", "Section.Component", "a double angle needs the properties of one angle" },
     };
 
     [Theory]
@@ -184,7 +186,40 @@ public class Sans10162StandardTests
             "weld length" => ac40.Connection(new TensionConnection { Kind = ConnectionKind.Welded, WeldLength = 0, ConnectedWidth = 60 }).Build(),
             "negative count" => ac40.Connectors(new ConnectorLayout { IntermediateCount = -1 }).Build(),
             "exponent" => ac40.Options(new DesignOptions { CompressionExponent = 0 }).Build(),
+            "shear centre off the symmetry axis" => ac40.Section(SectionBuilder.Ac40DoubleAngle() with { X0 = 3 }).Build(),
+            "no component" => ac40.Section(SectionBuilder.Ac40DoubleAngle() with { Component = null }).Build(),
             _ => throw new ArgumentOutOfRangeException(nameof(@case), @case, "unknown case"),
         };
+    }
+
+    [Fact]
+    public void Random_inputs_either_fail_validation_or_give_finite_numbers()
+    {
+        // Seeded sweep (2026-12-01): lengths, K, strengths and forces drawn from ordinary, zero, negative and
+        // non-finite values. A result must never hold NaN or infinity; invalid input must throw InputValidationException.
+        var rng = new Random(42);
+        double[] odd = [0, -1, double.NaN, double.PositiveInfinity, 1e-9, 1e9];
+        double Pick(double lo, double hi) => rng.Next(6) == 0 ? odd[rng.Next(odd.Length)] : lo + rng.NextDouble() * (hi - lo);
+        var thrown = 0;
+        for (var i = 0; i < 2000; i++)
+        {
+            var lengths = new EffectiveLengths { Lx = Pick(100, 8000), Ly = Pick(100, 8000), Lz = Pick(100, 8000), Kx = Pick(0.5, 2) };
+            var builder = rng.Next(2) == 0 ? MemberBuilder.Ac40() : new MemberBuilder();
+            var member = builder.Lengths(lengths).Steel(Pick(200, 450), 500).Build();
+            var forces = new MemberForces(Math.Abs(Pick(0, 1e6)), Math.Abs(Pick(0, 1e6)));
+            try
+            {
+                var r = Standard.CheckMember(member, forces, withRecord: i % 2 == 0);
+                Assert.True(double.IsFinite(r.Utilization), $"case {i}: utilization {r.Utilization}");
+                Assert.All(r.Checks, c => Assert.True(double.IsFinite(c.Resistance) && double.IsFinite(c.Utilization) && double.IsFinite(c.Demand), $"case {i}: {c.Name}"));
+            }
+            catch (InputValidationException ex)
+            {
+                Assert.NotEmpty(ex.Issues);
+                thrown++;
+            }
+        }
+
+        Assert.InRange(thrown, 1, 1999);
     }
 }
