@@ -222,4 +222,22 @@ public class Sans10162StandardTests
 
         Assert.InRange(thrown, 1, 1999);
     }
+
+    [Fact]
+    public void Class_4_member_uses_the_effective_area_in_its_compressive_resistance_and_says_so()
+    {
+        // [C] legs 100 × 6 mm at Fy 355 are class 4 (b/t 16.7 > 10.6); Ae = A − 435.7 mm² (see ClassificationTests).
+        var section = SectionBuilder.L4x4x1_2() with
+        {
+            Elements = [new TrussWeb.Core.Sections.PlateElement("leg", TrussWeb.Core.Sections.ElementKind.AngleLeg, 100, 6, 2, 94)],
+        };
+        var member = new MemberBuilder().Section(section).Steel(355, 470).Length(1500).Build();
+        var result = Standard.CheckMember(member, new MemberForces(0, 50e3));
+        var ae = section.Area - 435.727;
+        var expected = Compression.Resistance(section, member.Material, member.Lengths, 1.34, ae, null, null).Cr;
+        var check = result.Checks.Single(c => c.Name == "Compression: member buckling");
+        AssertClose.Relative(expected, check.Resistance, 1e-5, "Cr with Ae");
+        AssertClose.Relative(ae, result.Record!.Find("Ae")!.Value, 1e-5, "Ae");
+        Assert.Contains(result.Record.Notes, n => n.StartsWith("Class 4: Cr uses the effective area", StringComparison.Ordinal));
+    }
 }
