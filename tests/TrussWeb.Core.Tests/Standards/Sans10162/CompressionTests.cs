@@ -132,6 +132,23 @@ public class CompressionTests
     }
 
     [Fact]
+    public void Equal_angle_couples_only_the_major_axis_with_torsion()
+    {
+        // Identity: an equal angle's shear centre lies on its axis of symmetry u-u (v0 = 0), so the cubic factors into
+        // (Fe − Fev)[(Fe − Feu)(Fe − Fez) − Fe²(u0/r0)²] and Fe = min(Fev, Feuz) with Feuz the singly symmetric form.
+        // Section: L4X4X1/2, AISC Shapes Database v16.0 (REFERENCES.md §1).
+        var s = SectionBuilder.L4x4x1_2();
+        Assert.Equal(0, s.V0, 9);
+        foreach (var length in new[] { 500.0, 1500, 3000 })
+        {
+            var r = Compression.Resistance(s, Steel350, EffectiveLengths.Uniform(length), 1.34, s.Area, null, null);
+            var h = 1 - s.U0 * s.U0 / (s.R0 * s.R0);
+            var feuz = Compression.FlexuralTorsionalSinglySymmetric(r.Fe1, r.Fez, h);
+            AssertClose.Relative(Math.Min(r.Fe2, feuz), r.Fe, 1e-9, $"Fe at L = {length}");
+        }
+    }
+
+    [Fact]
     public void Doubly_symmetric_section_returns_the_least_of_the_three_stresses()
     {
         // Identity (SANS 10162-1 cl. 13.3.2 (a)): Fe = min(Fex, Fey, Fez). Torsion made to govern with a tiny J.
