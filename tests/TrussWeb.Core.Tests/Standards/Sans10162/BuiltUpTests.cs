@@ -17,7 +17,7 @@ public class BuiltUpTests
         var result = Standard.CheckMember(member, new MemberForces(0, 100e3));
         var r = result.Record!;
 
-        // Source: CSA S16-14 worked example AC40 (REFERENCES.md §3).
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14.
         AssertClose.Relative(2222, r.Find("a_max")!.Value, 0.001, "a_max");
         AssertClose.Relative(1500, r.Find("a")!.Value, 1e-12, "a");
         AssertClose.Relative(69.28, r.Find("ρo")!.Value, 0.001, "ρo");
@@ -37,7 +37,7 @@ public class BuiltUpTests
     {
         var member = MemberBuilder.Ac40().Build();
         var layout = BuiltUp.Layout(member.Section, member.Lengths, null, null);
-        // Source: CSA S16-14 worked example AC40 (REFERENCES.md §3): a ≤ 2222 mm → one connector at mid-length, a = 1500 mm.
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14: a ≤ 2222 mm → one connector at mid-length, a = 1500 mm.
         Assert.Equal(1, layout.IntermediateCount);
         AssertClose.Relative(1500, layout.Spacing, 1e-12, "a");
         Assert.True(layout.Proposed);

@@ -12,7 +12,7 @@ public class ClassificationTests
     {
         var c = Classification.Classify(SectionBuilder.Ac40DoubleAngle(), 300, null);
         var longLeg = c.Elements[0];
-        // Source: CSA S16-14 worked example AC40 (REFERENCES.md §3): b/t = 11.2 < 200/√300 = 11.5.
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14: b/t = 11.2 < 200/√300 = 11.5.
         AssertClose.Relative(11.2, longLeg.Ratio, 0.005, "b/t");
         AssertClose.Relative(11.5, longLeg.Limit, 0.005, "limit");
         Assert.Equal(3, c.Class);

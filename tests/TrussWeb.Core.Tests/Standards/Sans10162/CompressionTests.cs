@@ -18,7 +18,7 @@ public class CompressionTests
         var s = SectionBuilder.Ac40DoubleAngle();
         var r = Compression.Resistance(s, Steel300, EffectiveLengths.Uniform(3000), 1.34, s.Area, null, null);
 
-        // Source: CSA S16-14 worked example AC40 (REFERENCES.md §3): Fex = 75.0 MPa, λ = 2.000, Cr = 139 kN (recomputed 139.4).
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14: Fex = 75.0 MPa, λ = 2.000, Cr = 139 kN (recomputed 139.4).
         AssertClose.Relative(162.2, r.Slenderness1, 0.001, "KxLx/rx");
         AssertClose.Relative(75.0, r.Fe1, 0.01, "Fex");
         AssertClose.Relative(75.0, r.Fe, 0.01, "Fe (x governs)");
@@ -35,7 +35,7 @@ public class CompressionTests
         // ρe = 129.6 from the worked example (REFERENCES.md §3), passed as the y-axis slenderness.
         var r = Compression.Resistance(s, Steel300, EffectiveLengths.Uniform(3000), 1.34, s.Area, 129.6, record);
 
-        // Source: CSA S16-14 worked example AC40 (REFERENCES.md §3): Fey 118 MPa, Ω = H 0.937, Fez 685 MPa, Feyz 116 MPa.
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14: Fey 118 MPa, Ω = H 0.937, Fez 685 MPa, Feyz 116 MPa.
         AssertClose.Relative(118, r.Fe2, 0.01, "Fey from ρe");
         AssertClose.Relative(0.937, record.Find("H")!.Value, 0.001, "H");
         AssertClose.Relative(685, r.Fez, 0.01, "Fez");
@@ -47,7 +47,7 @@ public class CompressionTests
     [Fact]
     public void Double_angle_ac40_y_axis_alone_gives_about_200_kN()
     {
-        // Source: CSA S16-14 worked example AC40 (REFERENCES.md §3): "the y-axis alone would give about 200 kN".
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14: "the y-axis alone would give about 200 kN".
         var feyz = Compression.FlexuralTorsionalSinglySymmetric(117.6, 682.9, 0.9371);
         var cr = Compression.FactoredResistance(0.9, 2300, 300, Math.Sqrt(300 / feyz), 1.34);
         AssertClose.Relative(200e3, cr, 0.01, "Cr about y");

@@ -132,7 +132,7 @@ public class Sans10162StandardTests
     [Fact]
     public void Utilization_exceeds_one_when_force_exceeds_resistance()
     {
-        // Source: CSA S16-14 worked example AC40 (REFERENCES.md §3): Cr = 139 kN; 150 kN fails.
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14: Cr = 139 kN; 150 kN fails.
         var result = Standard.CheckMember(MemberBuilder.Ac40().Connectors(new ConnectorLayout { IntermediateCount = 1 }).Build(), new MemberForces(0, 150e3));
         Assert.Equal(CheckStatus.Fail, result.Status);
         AssertClose.Relative(150.0 / 139.4, result.Utilization, 0.01, "utilization");

@@ -76,7 +76,7 @@ internal static class SectionBuilder
     public static SectionProperties L4x4x1_2() => AiscAngle("L4X4X1/2", 3.75, 4.00, 4.00, 0.500, 1.18, 1.18, 5.52, 5.52, 2.25, 8.79, 1.00, 0.322, 0.366);
 
     /// <summary>
-    /// One L89x64x7.9 of the double angle of CSA S16-14 worked example AC40 (REFERENCES.md §3):
+    /// One L89x64x7.9 of the double angle of Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14:
     /// A 1150 mm² (half of 2300), r_min 13.7 mm, J 24.1e3 mm⁴, Cw 11.5e6 mm⁶, b 88.9, t 7.94 [R].
     /// The other properties (Ix, Iy, principal directions, shear centre) are NOT given there; they come from
     /// a thin-walled midline model of the legs 88.9 and 63.5 mm, [C], with Iv set to A·13.7² so that
@@ -137,7 +137,7 @@ internal static class SectionBuilder
     }
 
     /// <summary>
-    /// 2L89x64x7.9 short legs back to back, 8 mm gap: CSA S16-14 worked example AC40 (REFERENCES.md §3) [R]:
+    /// 2L89x64x7.9 short legs back to back, 8 mm gap: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14 [R]:
     /// A 2300 mm², rx 18.5 mm, ry 43.3 mm, x0 = 0, y0 = 12.2 mm (r0_bar² = 2366 mm²), J 48.2e3 mm⁴,
     /// Cw 23e6 mm⁶ (pair), b/t of a leg 88.9/7.94.
     /// </summary>

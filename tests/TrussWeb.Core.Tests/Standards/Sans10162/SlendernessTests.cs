@@ -11,7 +11,7 @@ public class SlendernessTests
     public void Compression_slenderness_of_ac40_is_the_x_axis_value()
     {
         var r = Slenderness.CheckCompression(SectionBuilder.Ac40DoubleAngle(), EffectiveLengths.Uniform(3000), 200, null);
-        // Source: CSA S16-14 worked example AC40 (REFERENCES.md §3): (KL/r)x = 162.2; limit 200 (cl. 10.4.2.1).
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), Example AC40, to CSA S16-14: (KL/r)x = 162.2; limit 200 (cl. 10.4.2.1).
         AssertClose.Relative(162.2, r.Demand, 0.001, "KL/r");
         Assert.Equal(200, r.Resistance);
         Assert.Equal(CheckStatus.Pass, r.Status);

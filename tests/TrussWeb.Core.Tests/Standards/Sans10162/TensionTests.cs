@@ -9,7 +9,7 @@ namespace TrussWeb.Core.Tests.Standards.Sans10162;
 
 public class TensionTests
 {
-    // Source: CSA S16-14 worked example T15 (REFERENCES.md §4): L178x102x13, Fy 350, Fu 450 MPa, Ag 3390 mm², t 12.7 mm,
+    // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), notebook T15, to CSA S16-14: L178x102x13, Fy 350, Fu 450 MPa, Ag 3390 mm², t 12.7 mm,
     // 2 rows × 4 lines of 3/4 in bolts through the long leg, hole allowance 24 mm.
     private static readonly Material T15Steel = new("350W", 350, 450, Material.SansE, Material.SansG);
 
@@ -41,7 +41,7 @@ public class TensionTests
         var record = new CalcRecord("T15");
         var checks = Tension.Check(T15Angle(), T15Steel, T15Bolts(4, new BlockShearPath(977.9, 3302, 0.6)), 500e3, record);
 
-        // Source: CSA S16-14 worked example T15 (REFERENCES.md §4): gross yield 1068 kN; An 2780, An' 2224 mm², 750.7 kN; block shear 792.4 kN.
+        // Source: Carleton University CIVE 3205 course notes (N. M. Holtz), notebook T15, to CSA S16-14: gross yield 1068 kN; An 2780, An' 2224 mm², 750.7 kN; block shear 792.4 kN.
         AssertClose.Relative(1068e3, checks[0].Resistance, 0.001, "gross yield");
         AssertClose.Relative(2780, record.Find("An")!.Value, 0.001, "An");
         AssertClose.Relative(2224, record.Find("Ane")!.Value, 0.001, "An'");
