@@ -216,6 +216,11 @@ public static class DesignLengthBuilder
             LxSource = Source("x", o.Lx, o.Kx, computed.LxSource),
             LySource = Source("y", o.Ly, o.Ky, computed.LySource),
             LzSource = o.Lz is null && o.Kz is null && o.Ly is not null ? "equal to the out-of-plane length (user override)" : Source("z", o.Lz, o.Kz, computed.LzSource),
-        };
+        } is var applied && (o.KLu is not null || o.KLv is not null)
+            ? applied with
+            {
+                LySource = applied.LySource + $"; user override: principal-axis lengths KLu = {(o.KLu is { } klu ? Mm(klu) + " mm" : "not given")}, KLv = {(o.KLv is { } klv ? Mm(klv) + " mm" : "not given")}{why}",
+            }
+            : applied;
     }
 }

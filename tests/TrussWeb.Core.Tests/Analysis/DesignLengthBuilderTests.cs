@@ -92,6 +92,16 @@ public class DesignLengthBuilderTests
     }
 
     [Fact]
+    public void Principal_axis_override_is_stated()
+    {
+        var overrides = new Dictionary<string, MemberLengthOverride> { ["D1"] = new() { KLv = 1800 } };
+        var lengths = DesignLengthBuilder.Build(Pratt(), overrides)["D1"];
+        Assert.Equal(1800, lengths.KLv);
+        Assert.Null(lengths.KLu);
+        Assert.EndsWith("; user override: principal-axis lengths KLu = not given, KLv = 1 800 mm", lengths.LySource, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Chain_ending_at_an_unrestrained_free_end_is_flagged()
     {
         var model = Pratt();
