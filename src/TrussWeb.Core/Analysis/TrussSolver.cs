@@ -16,7 +16,25 @@ namespace TrussWeb.Core.Analysis;
 /// </summary>
 public static class TrussSolver
 {
-    /// <summary>Analyses the model for every case and combination.</summary>
+    /// <summary>As <see cref="Analyse"/>, but returns the issues instead of throwing when the input is invalid.</summary>
+    public static bool TryAnalyse(TrussModel model, IReadOnlyList<LoadCase> cases, IReadOnlyList<LoadCombination> combinations, AnalysisOptions options,
+        out AnalysisResult? result, out IReadOnlyList<ValidationIssue> issues)
+    {
+        try
+        {
+            result = Analyse(model, cases, combinations, options);
+            issues = [];
+            return true;
+        }
+        catch (InputValidationException ex)
+        {
+            result = null;
+            issues = ex.Issues;
+            return false;
+        }
+    }
+
+    /// <summary>Analyses the model for every case and combination; throws <see cref="InputValidationException"/> naming every problem.</summary>
     public static AnalysisResult Analyse(TrussModel model, IReadOnlyList<LoadCase> cases, IReadOnlyList<LoadCombination> combinations, AnalysisOptions options)
     {
         ArgumentNullException.ThrowIfNull(model);

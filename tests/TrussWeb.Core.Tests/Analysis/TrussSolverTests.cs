@@ -228,4 +228,31 @@ public class TrussSolverTests
         var ex = Assert.Throws<InputValidationException>(() => SolveOne(HandWarren(), TrussBuilder.Down("P", ("X9", 1000))));
         Assert.Contains(ex.Issues, i => i.Message == "load case P has a load at unknown node 'X9'");
     }
+
+    [Fact]
+    public void TryAnalyse_returns_the_issues_of_an_unstable_truss()
+    {
+        var model = HandWarren() with { Supports = [new Core.Model.Support("L0", SupportKind.RollerX), new Core.Model.Support("L2", SupportKind.RollerX)] };
+        var ok = TrussSolver.TryAnalyse(model, [TrussBuilder.Down("P", ("U1", 1000))], [], AnalysisOptions.UniformArea(1000), out var result, out var issues);
+        Assert.False(ok);
+        Assert.Null(result);
+        Assert.Contains(issues, i => i.Field == "Supports" && i.Message.StartsWith("unstable supports: nothing restrains the truss in x", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Renumbering_keeps_the_band_narrow_whatever_the_input_order()
+    {
+        var model = TrussGenerator.Generate(new TrussParameters { Type = TrussType.ParallelPratt, Span = 150_000, HeelDepth = 1500, PanelCount = 100, TrussSpacing = 6000 });
+        var rng = new Random(7);
+        var shuffled = model with { Nodes = model.Nodes.OrderBy(_ => rng.Next()).ToList() };
+        var result = TrussSolver.Analyse(shuffled, [TrussBuilder.Down("P", ("U50", 1000))], [], AnalysisOptions.UniformArea(1000));
+
+        // RCM on a ladder-like truss: each breadth-first level holds at most 2–3 nodes, so no member spans
+        // more than 3 positions → half-bandwidth ≤ 2·3 + 1 = 7 DOF (Cuthill–McKee level-structure bound).
+        Assert.InRange(result.HalfBandwidth, 1, 7);
+
+        // Same answer as the generated order: mid-span bottom chord force is independent of numbering.
+        var reference = TrussSolver.Analyse(model, [TrussBuilder.Down("P", ("U50", 1000))], [], AnalysisOptions.UniformArea(1000));
+        AssertClose.Relative(reference.Case("P").MemberForces["BC50"], result.Case("P").MemberForces["BC50"], 1e-9, "BC50");
+    }
 }
