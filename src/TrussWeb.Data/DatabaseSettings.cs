@@ -31,7 +31,9 @@ public sealed record DatabaseSettings(DatabaseProvider Provider, string Connecti
         var providerText = configuration[ProviderKey];
         var provider = DatabaseProvider.Sqlite;
         if (!string.IsNullOrWhiteSpace(providerText)
-            && (!Enum.TryParse(providerText.Trim(), ignoreCase: true, out provider) || !Enum.IsDefined(provider)))
+            && (!char.IsLetter(providerText.Trim()[0])
+                || !Enum.TryParse(providerText.Trim(), ignoreCase: true, out provider)
+                || !Enum.IsDefined(provider)))
         {
             throw new InvalidOperationException(
                 $"Configuration '{ProviderKey}' is '{providerText}'; expected 'Sqlite' or 'Postgres'.");
