@@ -28,6 +28,28 @@ public sealed class SqliteDataTests : DataBehaviourTests
     }
 
     [Fact]
+    public async Task A_database_file_made_elsewhere_in_rollback_journal_mode_is_switched_to_wal_when_opened()
+    {
+        var database = (SqliteTestDatabase)await NewDatabaseAsync();
+        await using (var plain = new SqliteConnection(database.ConnectionString))
+        {
+            await plain.OpenAsync();
+            await using var create = plain.CreateCommand();
+            create.CommandText = "CREATE TABLE made_elsewhere (id INTEGER PRIMARY KEY)";
+            await create.ExecuteNonQueryAsync();
+            Assert.Equal("delete", await ScalarAsync(plain, "PRAGMA journal_mode"));
+        }
+
+        SqliteConnection.ClearAllPools();
+        var services = NewServices(database);
+        await DatabaseMigrator.MigrateAsync(services);
+
+        await using var check = new SqliteConnection(database.ConnectionString);
+        await check.OpenAsync();
+        Assert.Equal("wal", await ScalarAsync(check, "PRAGMA journal_mode"));
+    }
+
+    [Fact]
     public async Task Without_a_connection_string_the_database_is_data_trussweb_db_under_the_content_root()
     {
         var root = Path.Combine(Path.GetTempPath(), "trussweb-data-tests", Guid.NewGuid().ToString("N"));

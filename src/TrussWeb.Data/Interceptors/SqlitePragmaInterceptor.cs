@@ -1,4 +1,5 @@
 using System.Data.Common;
+using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore.Diagnostics;
 
 namespace TrussWeb.Data.Interceptors;
@@ -13,8 +14,12 @@ public sealed class SqlitePragmaInterceptor : DbConnectionInterceptor
     /// <summary>Milliseconds a connection waits for a lock before SQLite reports busy.</summary>
     public const int BusyTimeoutMilliseconds = 5000;
 
-    private static readonly string Pragmas =
-        $"PRAGMA journal_mode=WAL; PRAGMA foreign_keys=ON; PRAGMA busy_timeout={BusyTimeoutMilliseconds};";
+    private static readonly string ConnectionPragmas =
+        $"PRAGMA foreign_keys=ON; PRAGMA busy_timeout={BusyTimeoutMilliseconds};";
+
+    // A read-only connection (EF Core opens one to test whether the file exists) cannot change the
+    // journal mode of a file in rollback mode: it only gets the per-connection pragmas. 2026-12-01.
+    private static readonly string WritablePragmas = "PRAGMA journal_mode=WAL; " + ConnectionPragmas;
 
     /// <summary>The shared instance (the interceptor holds no state).</summary>
     public static SqlitePragmaInterceptor Instance { get; } = new();
@@ -24,7 +29,7 @@ public sealed class SqlitePragmaInterceptor : DbConnectionInterceptor
     {
         ArgumentNullException.ThrowIfNull(connection);
         using var command = connection.CreateCommand();
-        command.CommandText = Pragmas;
+        command.CommandText = PragmasFor(connection);
         command.ExecuteNonQuery();
     }
 
@@ -36,8 +41,13 @@ public sealed class SqlitePragmaInterceptor : DbConnectionInterceptor
         var command = connection.CreateCommand();
         await using (command.ConfigureAwait(false))
         {
-            command.CommandText = Pragmas;
+            command.CommandText = PragmasFor(connection);
             await command.ExecuteNonQueryAsync(cancellationToken).ConfigureAwait(false);
         }
     }
+
+    private static string PragmasFor(DbConnection connection) =>
+        new SqliteConnectionStringBuilder(connection.ConnectionString).Mode == SqliteOpenMode.ReadOnly
+            ? ConnectionPragmas
+            : WritablePragmas;
 }
