@@ -1,3 +1,4 @@
+using Microsoft.AspNetCore.DataProtection.EntityFrameworkCore;
 using Microsoft.AspNetCore.Identity;
 using Microsoft.AspNetCore.Identity.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore;
@@ -9,10 +10,11 @@ namespace TrussWeb.Data;
 /// The TrussWeb database: Identity tables plus projects, trusses, loads, design snapshots, catalogues
 /// and the append-only audit log. Create short-lived instances through
 /// <see cref="IDbContextFactory{TContext}"/> (see <see cref="DependencyInjection.AddTrussWebData"/>);
-/// the provider-specific subclasses <see cref="SqliteTrussWebDbContext"/> and
+/// it also holds the ASP.NET Core data-protection keys so several app instances share them
+/// (<c>PersistKeysToDbContext&lt;TrussWebDbContext&gt;()</c>). The provider-specific subclasses <see cref="SqliteTrussWebDbContext"/> and
 /// <see cref="PostgresTrussWebDbContext"/> exist only to own their migrations.
 /// </summary>
-public class TrussWebDbContext : IdentityDbContext<AppUser, IdentityRole, string>
+public class TrussWebDbContext : IdentityDbContext<AppUser, IdentityRole, string>, IDataProtectionKeyContext
 {
     /// <summary>Creates a context from options built for this type.</summary>
     public TrussWebDbContext(DbContextOptions<TrussWebDbContext> options)
@@ -53,6 +55,9 @@ public class TrussWebDbContext : IdentityDbContext<AppUser, IdentityRole, string
     public DbSet<SteelGradeEntry> SteelGrades => Set<SteelGradeEntry>();
 
     public DbSet<AuditEntry> AuditEntries => Set<AuditEntry>();
+
+    /// <inheritdoc />
+    public DbSet<DataProtectionKey> DataProtectionKeys => Set<DataProtectionKey>();
 
     /// <inheritdoc />
     public override int SaveChanges(bool acceptAllChangesOnSuccess)

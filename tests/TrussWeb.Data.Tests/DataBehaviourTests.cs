@@ -1,4 +1,5 @@
 using System.Data.Common;
+using Microsoft.AspNetCore.DataProtection;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Time.Testing;
@@ -427,6 +428,23 @@ public abstract class DataBehaviourTests : IAsyncLifetime
         await Assert.ThrowsAsync<DbUpdateException>(() => context.SaveChangesAsync());
     }
 
+    [Fact]
+    public async Task Data_protection_keys_kept_in_the_database_are_shared_by_two_app_instances()
+    {
+        static void AddKeys(IServiceCollection services) =>
+            services.AddDataProtection().SetApplicationName("TrussWeb").PersistKeysToDbContext<TrussWebDbContext>();
+
+        var first = NewServices(Database, AddKeys);
+        var protectedText = first.GetRequiredService<IDataProtectionProvider>().CreateProtector("test").Protect("member T1");
+
+        var second = NewServices(Database, AddKeys);
+        var text = second.GetRequiredService<IDataProtectionProvider>().CreateProtector("test").Unprotect(protectedText);
+
+        Assert.Equal("member T1", text);
+        await using var context = await CreateContextAsync();
+        Assert.Equal(1, await context.DataProtectionKeys.CountAsync());
+    }
+
     protected async Task<TestDatabase> NewDatabaseAsync()
     {
         var database = await CreateEmptyDatabaseAsync();
@@ -434,9 +452,9 @@ public abstract class DataBehaviourTests : IAsyncLifetime
         return database;
     }
 
-    protected ServiceProvider NewServices(TestDatabase database)
+    protected ServiceProvider NewServices(TestDatabase database, Action<IServiceCollection>? configure = null)
     {
-        var provider = database.BuildServices(Clock, User);
+        var provider = database.BuildServices(Clock, User, configure);
         providers.Add(provider);
         return provider;
     }

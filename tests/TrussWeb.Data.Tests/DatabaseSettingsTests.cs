@@ -65,6 +65,7 @@ public sealed class DatabaseSettingsTests
         using var context = scope.ServiceProvider.GetRequiredService<IDbContextFactory<TrussWebDbContext>>().CreateDbContext();
         Assert.IsType<SqliteTrussWebDbContext>(context);
         Assert.True(context.Database.IsSqlite());
+        Assert.IsType<SqliteTrussWebDbContext>(scope.ServiceProvider.GetRequiredService<TrussWebDbContext>());
     }
 
     private static IConfiguration Configuration(params (string Key, string Value)[] values) =>

@@ -15,7 +15,7 @@ public abstract class TestDatabase : IAsyncDisposable
     /// A fresh service provider over this database, built the way the app builds it
     /// (<see cref="DependencyInjection.AddTrussWebData"/> from configuration), with the given clock and user.
     /// </summary>
-    public ServiceProvider BuildServices(FakeTimeProvider clock, TestUser user)
+    public ServiceProvider BuildServices(FakeTimeProvider clock, TestUser user, Action<IServiceCollection>? configure = null)
     {
         var configuration = new ConfigurationBuilder()
             .AddInMemoryCollection(new Dictionary<string, string?>
@@ -28,6 +28,7 @@ public abstract class TestDatabase : IAsyncDisposable
         services.AddSingleton<TimeProvider>(clock);
         services.AddSingleton<ICurrentUser>(user);
         services.AddTrussWebData(configuration, Path.GetTempPath());
+        configure?.Invoke(services);
         return services.BuildServiceProvider(new ServiceProviderOptions { ValidateScopes = true, ValidateOnBuild = true });
     }
 
