@@ -52,6 +52,9 @@ public sealed record DatabaseSettings(DatabaseProvider Provider, string Connecti
         };
     }
 
+    /// <summary>Names the provider only: the connection string may hold a password and must not reach logs.</summary>
+    public override string ToString() => $"DatabaseSettings {{ Provider = {Provider} }}";
+
     private static string ResolveSqlite(string connectionString, string contentRootPath)
     {
         SqliteConnectionStringBuilder builder;

@@ -66,6 +66,8 @@ public abstract class DataBehaviourTests : IAsyncLifetime
         await DatabaseMigrator.MigrateAsync(services);
 
         await using var context = await CreateContextAsync(services);
+        Assert.Equal(empty.Provider == DatabaseProvider.Postgres, context.Database.IsNpgsql());
+        Assert.Equal(empty.Provider == DatabaseProvider.Sqlite, context.Database.IsSqlite());
         Assert.Equal(context.Database.GetMigrations(), await context.Database.GetAppliedMigrationsAsync());
         Assert.Empty(await context.Database.GetPendingMigrationsAsync());
         Assert.False(context.Database.HasPendingModelChanges(), "The model differs from the migrations' snapshot: add a migration for both providers.");
@@ -239,6 +241,41 @@ public abstract class DataBehaviourTests : IAsyncLifetime
         Assert.Equal("2L 80x80x8", stored.SectionDesignationOverride);
         Assert.Equal(3, stored.Version);
         Assert.Equal("carol", stored.UpdatedBy);
+    }
+
+    [Fact]
+    public async Task Editing_a_member_someone_else_deleted_is_described_as_deleted()
+    {
+        var memberId = await SaveSampleProjectAsync();
+        await using var editor = await CreateContextAsync();
+        var member = await editor.TrussMembers.SingleAsync(m => m.Id == memberId);
+        await using (var other = await CreateContextAsync())
+        {
+            other.TrussMembers.Remove(await other.TrussMembers.SingleAsync(m => m.Id == memberId));
+            await other.SaveChangesAsync();
+        }
+
+        member.Kx = 0.5;
+        var error = await Assert.ThrowsAsync<DbUpdateConcurrencyException>(() => editor.SaveChangesAsync());
+        var conflict = Assert.Single((await ConcurrencyConflicts.DescribeAsync(error)).Conflicts);
+
+        Assert.True(conflict.WasDeleted);
+        Assert.Null(conflict.DatabaseValues);
+        Assert.Equal(0.5, conflict.YourValues["Kx"]);
+        Assert.Contains("TrussMember 'T1'", conflict.Message, StringComparison.Ordinal);
+        Assert.Contains("was deleted", conflict.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task Rows_saved_without_a_signed_in_user_are_stamped_as_the_system()
+    {
+        User.UserId = null;
+        var memberId = await SaveSampleProjectAsync();
+        await using var read = await CreateContextAsync();
+        var member = await read.TrussMembers.SingleAsync(m => m.Id == memberId);
+        Assert.Null(member.CreatedBy);
+        Assert.Null(member.UpdatedBy);
+        Assert.Equal(Start.UtcDateTime, member.UpdatedUtc);
     }
 
     [Fact]

@@ -36,6 +36,17 @@ public sealed class DatabaseSettingsTests
     }
 
     [Fact]
+    public void Settings_text_never_shows_the_connection_string()
+    {
+        var settings = DatabaseSettings.FromConfiguration(
+            Configuration(("TrussWeb:Database:Provider", "Postgres"), ("TrussWeb:Database:ConnectionString", "Host=db;Password=example-only")),
+            Root);
+        Assert.Equal("Host=db;Password=example-only", settings.ConnectionString);
+        Assert.DoesNotContain("example-only", settings.ToString(), StringComparison.Ordinal);
+        Assert.Contains("Postgres", settings.ToString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Sqlite_is_the_default_and_a_relative_file_resolves_against_the_content_root()
     {
         var settings = DatabaseSettings.FromConfiguration(Configuration(), Root);
