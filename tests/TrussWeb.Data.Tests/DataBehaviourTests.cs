@@ -1,9 +1,7 @@
-using System.Data.Common;
 using Microsoft.AspNetCore.DataProtection;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Time.Testing;
-using TrussWeb.Data.Concurrency;
 using TrussWeb.Data.Entities;
 using TrussWeb.Data.Tests.Support;
 
