@@ -139,6 +139,8 @@ public abstract partial class DataBehaviourTests : IAsyncLifetime
         Assert.Equal(3, t1.ConnectorCount);
         Assert.True(t1.UseModifiedSlenderness);
         Assert.Equal("Draft", t1.ReviewState);
+        Assert.Equal(new DateTime(2026, 3, 1, 12, 0, 0, DateTimeKind.Utc), t1.SubmittedUtc);
+        Assert.Equal(DateTimeKind.Utc, t1.SubmittedUtc!.Value.Kind);
         var w1 = truss.Members.Single(m => m.Mark == "W1");
         Assert.Equal("L 50x50x5", w1.SectionDesignationOverride);
         Assert.Equal(650.25, w1.KLvMm);

@@ -65,7 +65,7 @@ public static class ProjectBuilder
 
         truss.Members.AddRange(
         [
-            new TrussMember { Mark = "T1", StartNode = n1, EndNode = n4, Group = chords, Kx = 0.9, LengthYMm = 4571.3, ConnectorCount = 3, ConnectorSpacingMm = 1100, UseModifiedSlenderness = true },
+            new TrussMember { Mark = "T1", StartNode = n1, EndNode = n4, Group = chords, Kx = 0.9, LengthYMm = 4571.3, SubmittedUtc = new DateTime(2026, 3, 1, 12, 0, 0, DateTimeKind.Unspecified), ConnectorCount = 3, ConnectorSpacingMm = 1100, UseModifiedSlenderness = true },
             new TrussMember { Mark = "T2", StartNode = n4, EndNode = n3, Group = chords },
             new TrussMember { Mark = "B1", StartNode = n1, EndNode = n2, Group = chords },
             new TrussMember { Mark = "B2", StartNode = n2, EndNode = n3, Group = chords },
