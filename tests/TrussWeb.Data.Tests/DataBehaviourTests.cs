@@ -71,6 +71,12 @@ public abstract partial class DataBehaviourTests : IAsyncLifetime
         Assert.False(context.Database.HasPendingModelChanges(), "The model differs from the migrations' snapshot: add a migration for both providers.");
         Assert.Equal(0, await context.Projects.CountAsync());
         Assert.Equal(0, await context.Users.CountAsync());
+        Assert.Equal(
+            Roles.All.OrderBy(r => r, StringComparer.Ordinal),
+            (await context.Roles.Select(r => r.Name!).ToListAsync()).OrderBy(r => r, StringComparer.Ordinal));
+        Assert.Equal(
+            Roles.All.Select(r => r.ToUpperInvariant()).Order(StringComparer.Ordinal),
+            (await context.Roles.Select(r => r.NormalizedName!).ToListAsync()).Order(StringComparer.Ordinal));
     }
 
     [Fact]

@@ -65,6 +65,36 @@ namespace TrussWeb.Data.Migrations.Postgres
                         .HasDatabaseName("RoleNameIndex");
 
                     b.ToTable("AspNetRoles", (string)null);
+
+                    b.HasData(
+                        new
+                        {
+                            Id = "role-designer",
+                            ConcurrencyStamp = "seed-designer",
+                            Name = "Designer",
+                            NormalizedName = "DESIGNER"
+                        },
+                        new
+                        {
+                            Id = "role-checker",
+                            ConcurrencyStamp = "seed-checker",
+                            Name = "Checker",
+                            NormalizedName = "CHECKER"
+                        },
+                        new
+                        {
+                            Id = "role-projectlead",
+                            ConcurrencyStamp = "seed-projectlead",
+                            Name = "ProjectLead",
+                            NormalizedName = "PROJECTLEAD"
+                        },
+                        new
+                        {
+                            Id = "role-administrator",
+                            ConcurrencyStamp = "seed-administrator",
+                            Name = "Administrator",
+                            NormalizedName = "ADMINISTRATOR"
+                        });
                 });
 
             modelBuilder.Entity("Microsoft.AspNetCore.Identity.IdentityRoleClaim<string>", b =>
