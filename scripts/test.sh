@@ -6,11 +6,18 @@ cd "$(dirname "$0")/.."
 export DOTNET_CLI_TELEMETRY_OPTOUT=1 DOTNET_NOLOGO=1 DOTNET_SKIP_FIRST_TIME_EXPERIENCE=1
 start=$(date +%s)
 
+echo "== prerequisites"
+# The data tests start a throwaway PostgreSQL 15 cluster (scripts/pg-test-cluster.sh) unless
+# TRUSSWEB_TEST_PG names a server; a fresh machine gets the server binaries from Debian.
+if [ -z "${TRUSSWEB_TEST_PG:-}" ] && [ ! -x /usr/lib/postgresql/15/bin/initdb ] && ! command -v initdb >/dev/null 2>&1; then
+  apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq postgresql-15 >/dev/null
+fi
+
 echo "== build (Release)"
 dotnet build TrussWeb.sln -c Release -nologo -v quiet
 
 echo "== unit tests"
-for project in tests/TrussWeb.Core.Tests; do
+for project in tests/TrussWeb.Core.Tests tests/TrussWeb.Data.Tests; do
   dotnet test "$project" -c Release --no-build -nologo --logger "console;verbosity=minimal"
 done
 
