@@ -73,4 +73,31 @@ public class SectionsPageTests : TrussWebTestContext
         Assert.Equal(Display.Sig(entry.Properties.J) + " mm⁴", ValueOf("J"));
         Assert.NotNull(cut.Find("[data-testid=section-path]"));
     }
+
+    [Fact]
+    public void Browser_opens_on_a_given_designation_in_its_family()
+    {
+        var entry = TestData.Catalogue.OfFamily(SectionFamily.RectangularHollow).First();
+
+        var cut = Render<Web.Components.Sections.SectionCatalogueBrowser>(p => p
+            .Add(c => c.Catalogue, TestData.Catalogue)
+            .Add(c => c.InitialDesignation, entry.Designation.ToLowerInvariant()));
+
+        Assert.Equal(CountOf(SectionFamily.RectangularHollow), cut.FindAll("[data-testid=catalogue-row]").Count);
+        Assert.Contains(entry.Designation, cut.Find("[data-testid=section-caption]").TextContent);
+        Assert.Equal("true", cut.Find($"[data-testid=family-{SectionFamily.RectangularHollow}]").GetAttribute("aria-pressed"));
+    }
+
+    [Fact]
+    public void Selecting_raises_the_selected_entry()
+    {
+        SectionCatalogueEntry? raised = null;
+        var cut = Render<Web.Components.Sections.SectionCatalogueBrowser>(p => p
+            .Add(c => c.Catalogue, TestData.Catalogue)
+            .Add(c => c.OnSelected, e => raised = e));
+
+        cut.FindAll("[data-testid=catalogue-row]")[2].Click();
+
+        Assert.Same(TestData.Catalogue.OfFamily(SectionFamily.Angle).ElementAt(2), raised);
+    }
 }

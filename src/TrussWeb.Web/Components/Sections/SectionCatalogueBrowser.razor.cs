@@ -12,6 +12,9 @@ public partial class SectionCatalogueBrowser
     /// <summary>Family shown first.</summary>
     [Parameter] public SectionFamily InitialFamily { get; set; } = SectionFamily.Angle;
 
+    /// <summary>Designation to select on first render (e.g. from a link); ignored when not in the catalogue.</summary>
+    [Parameter] public string? InitialDesignation { get; set; }
+
     /// <summary>Raised when the user selects a section.</summary>
     [Parameter] public EventCallback<SectionCatalogueEntry> OnSelected { get; set; }
 
@@ -68,6 +71,12 @@ public partial class SectionCatalogueBrowser
         {
             Family = InitialFamily;
             _initialised = true;
+            if (!string.IsNullOrWhiteSpace(InitialDesignation) && Catalogue.TryFind(InitialDesignation, out var entry, out _)
+                && Families.Contains(entry.Family))
+            {
+                Family = entry.Family;
+                Selected = entry;
+            }
         }
     }
 
