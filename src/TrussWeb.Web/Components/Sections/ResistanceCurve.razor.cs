@@ -15,7 +15,7 @@ public partial class ResistanceCurve
     private PlotlyChart? _chart;
     private IList<ITrace> _traces = [];
     private Plotly.Blazor.Layout _layout = new();
-    private readonly Config _config = new() { Responsive = true, DisplayLogo = false };
+    private readonly Config _config = new() { Responsive = true, DisplayLogo = false, DisplayModeBar = Plotly.Blazor.ConfigLib.DisplayModeBarEnum.False };
     private bool _rendered;
 
     [Parameter, EditorRequired] public required SectionProperties Section { get; set; }

@@ -8,6 +8,7 @@ namespace TrussWeb.Web.Components.Truss;
 public sealed record ElevationSegment(
     string Mark,
     string Group,
+    TrussWeb.Core.Model.MemberRole Role,
     double X1,
     double Y1,
     double X2,

@@ -16,7 +16,7 @@ public partial class TrussElevation
     private PlotlyChart? _chart;
     private IList<ITrace> _traces = [];
     private Plotly.Blazor.Layout _layout = new();
-    private readonly Config _config = new() { Responsive = true, DisplayLogo = false };
+    private readonly Config _config = new() { Responsive = true, DisplayLogo = false, DisplayModeBar = Plotly.Blazor.ConfigLib.DisplayModeBarEnum.False };
     private bool _subscribed;
 
     /// <summary>The truss, mm.</summary>
@@ -65,20 +65,35 @@ public partial class TrussElevation
 
     protected override async Task OnAfterRenderAsync(bool firstRender)
     {
-        if (_chart is null)
+        // Later parameter changes redraw the existing plot; the first drawing is the chart's own.
+        if (_chart is not null && _subscribed)
+        {
+            await _chart.React();
+        }
+    }
+
+    private void OnChartRendered() => _ = InvokeAsync(async () =>
+    {
+        try
+        {
+            await SubscribeClicksAsync();
+        }
+        catch (Exception ex)
+        {
+            await DispatchExceptionAsync(ex);
+        }
+    });
+
+    /// <summary>Subscribes to clicks once the chart has drawn (plotly.js adds its event hooks in newPlot).</summary>
+    private async Task SubscribeClicksAsync()
+    {
+        if (_chart is null || _subscribed)
         {
             return;
         }
 
-        if (!_subscribed)
-        {
-            _subscribed = true;
-            await _chart.SubscribeClickEvent();
-        }
-        else
-        {
-            await _chart.React();
-        }
+        _subscribed = true;
+        await _chart.SubscribeClickEvent();
     }
 
     /// <summary>The mark behind a clicked trace/point, or null (see <see cref="BuildTraces"/> for the trace order).</summary>
@@ -120,8 +135,13 @@ public partial class TrussElevation
             X = data.Segments.Select(s => (object)s.MidX).ToList(),
             Y = data.Segments.Select(s => (object)s.MidY).ToList(),
             TextArray = data.Segments.Select(s => s.Label).ToList(),
-            TextPosition = TextPositionEnum.TopCenter,
-            TextFont = new TextFont { Size = 10, Color = "#263238" },
+            TextPositionArray = data.Segments.Select(s => (TextPositionEnum?)(s.Role switch
+            {
+                MemberRole.TopChord => TextPositionEnum.TopCenter,
+                MemberRole.BottomChord => TextPositionEnum.BottomCenter,
+                _ => TextPositionEnum.MiddleRight,
+            })).ToList(),
+            TextFont = new TextFont { Size = 9, Color = "#263238" },
             Marker = new Marker { Size = 7, Color = "#ffffff", Line = new Plotly.Blazor.Traces.ScatterLib.MarkerLib.Line { Color = "#455a64", Width = 1 } },
             HoverInfo = HoverInfoFlag.Text,
         });

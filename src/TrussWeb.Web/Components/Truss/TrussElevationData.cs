@@ -90,8 +90,9 @@ public sealed class TrussElevationData
             var y1 = a.Y / MillimetresPerMetre;
             var x2 = b.X / MillimetresPerMetre;
             var y2 = b.Y / MillimetresPerMetre;
-            var seg = new ElevationSegment(member.Id, member.Group, x1, y1, x2, y2, (x1 + x2) / 2, (y1 + y2) / 2,
-                model.RoleOf(member) is MemberRole.TopChord or MemberRole.BottomChord ? ChordColour : WebColour,
+            var role = model.RoleOf(member);
+            var seg = new ElevationSegment(member.Id, member.Group, role, x1, y1, x2, y2, (x1 + x2) / 2, (y1 + y2) / 2,
+                role is MemberRole.TopChord or MemberRole.BottomChord ? ChordColour : WebColour,
                 member.Id, null, ForceSense.None, null);
             segments.Add(mode switch
             {
