@@ -10,7 +10,7 @@ echo "== build (Release)"
 dotnet build TrussWeb.sln -c Release -nologo -v quiet
 
 echo "== unit tests"
-for project in tests/TrussWeb.Core.Tests; do
+for project in tests/TrussWeb.Core.Tests tests/TrussWeb.Web.Tests; do
   dotnet test "$project" -c Release --no-build -nologo --logger "console;verbosity=minimal"
 done
 

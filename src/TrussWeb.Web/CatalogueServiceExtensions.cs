@@ -19,8 +19,8 @@ public static class CatalogueServiceExtensions
         ArgumentNullException.ThrowIfNull(configuration);
         services.AddOptions<TrussWebOptions>()
             .Bind(configuration.GetSection(TrussWebOptions.SectionName))
-            .Validate(o => !string.IsNullOrWhiteSpace(o.SeedDataFolder), $"{TrussWebOptions.SeedDataKey} must name a folder")
             .ValidateOnStart();
+        services.AddSingleton<IValidateOptions<TrussWebOptions>, TrussWebOptionsValidator>();
         services.AddSingleton(sp =>
         {
             var options = sp.GetRequiredService<IOptions<TrussWebOptions>>().Value;

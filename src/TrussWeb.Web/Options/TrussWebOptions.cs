@@ -1,3 +1,5 @@
+using Microsoft.Extensions.Configuration;
+
 namespace TrussWeb.Web.Options;
 
 /// <summary>Settings of the web app, bound from the configuration section <c>TrussWeb</c>.</summary>
@@ -17,5 +19,6 @@ public sealed class TrussWebOptions
     /// path is resolved against the content root; when that folder does not exist, the folders above
     /// <see cref="AppContext.BaseDirectory"/> are searched for one named <c>seed-data</c>.
     /// </summary>
+    [ConfigurationKeyName("SeedData")]
     public string SeedDataFolder { get; set; } = DefaultSeedDataFolder;
 }

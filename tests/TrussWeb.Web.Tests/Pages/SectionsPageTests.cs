@@ -57,6 +57,20 @@ public class SectionsPageTests : TrussWebTestContext
     }
 
     [Fact]
+    public void Sorting_by_designation_twice_gives_descending_natural_order()
+    {
+        var cut = Render<SectionsPage>();
+
+        cut.Find("[data-testid=sort-designation]").Click();
+        cut.Find("[data-testid=sort-designation]").Click();
+
+        var expected = TestData.Catalogue.OfFamily(SectionFamily.Angle).Select(e => e.Designation)
+            .OrderByDescending(d => d, Web.Components.Sections.DesignationOrder.Instance);
+        cut.WaitForAssertion(() => Assert.Equal(expected, cut.FindAll("[data-testid=catalogue-row]").Select(r => r.GetAttribute("data-designation"))));
+        Assert.Equal("descending", cut.Find("[data-testid=sort-designation]").GetAttribute("aria-sort"));
+    }
+
+    [Fact]
     public void Selecting_a_row_shows_its_drawing_and_properties()
     {
         var cut = Render<SectionsPage>();

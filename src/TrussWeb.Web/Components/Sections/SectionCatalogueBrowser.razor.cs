@@ -1,4 +1,5 @@
 using Microsoft.AspNetCore.Components;
+using Microsoft.AspNetCore.Components.Web;
 using TrussWeb.Core.Sections;
 
 namespace TrussWeb.Web.Components.Sections;
@@ -54,7 +55,9 @@ public partial class SectionCatalogueBrowser
             var rows = Catalogue.OfFamily(Family).Where(e => needle.Length == 0 || Normalise(e.Designation).Contains(needle, StringComparison.Ordinal));
             rows = SortKey switch
             {
-                "designation" => Order(rows, e => e.Designation),
+                "designation" => Descending
+                    ? rows.OrderByDescending(e => e.Designation, DesignationOrder.Instance)
+                    : rows.OrderBy(e => e.Designation, DesignationOrder.Instance),
                 "mass" => Order(rows, e => e.Properties.MassPerMetre),
                 "area" => Order(rows, e => e.Properties.Area),
                 "r1" => Order(rows, e => Radius1(e.Properties)),
@@ -117,6 +120,14 @@ public partial class SectionCatalogueBrowser
     private string SortMark(string key) => SortKey != key ? "" : Descending ? "▼" : "▲";
 
     private string AriaSort(string key) => SortKey != key ? "none" : Descending ? "descending" : "ascending";
+
+    private async Task OnRowKey(KeyboardEventArgs e, SectionCatalogueEntry entry)
+    {
+        if (e.Key is "Enter" or " ")
+        {
+            await Select(entry);
+        }
+    }
 
     private async Task Select(SectionCatalogueEntry entry)
     {
