@@ -16,6 +16,9 @@ public sealed class SectionOutline
     /// <summary>Straight segments per quarter circle of a rounding.</summary>
     public const int SegmentsPerQuarter = 8;
 
+    /// <summary>Straight segments of a full circle (CHS walls are drawn large, so finer than the corner roundings).</summary>
+    public const int SegmentsPerCircle = 96;
+
     private SectionOutline(string designation, SectionFamily family, IReadOnlyList<IReadOnlyList<OutlinePoint>> loops,
         OutlinePoint centroid, OutlinePoint shearCentre, double alpha, bool showPrincipalAxes)
     {
@@ -123,8 +126,8 @@ public sealed class SectionOutline
         ArgumentNullException.ThrowIfNull(properties);
         var r = c.Diameter / 2;
         var centre = new OutlinePoint(r, r);
-        var outer = Arc(centre, r, 0, 2 * Math.PI, 4 * SegmentsPerQuarter, closeDuplicate: false);
-        var inner = Arc(centre, r - c.Thickness, 0, 2 * Math.PI, 4 * SegmentsPerQuarter, closeDuplicate: false);
+        var outer = Arc(centre, r, 0, 2 * Math.PI, SegmentsPerCircle, closeDuplicate: false);
+        var inner = Arc(centre, r - c.Thickness, 0, 2 * Math.PI, SegmentsPerCircle, closeDuplicate: false);
         return new SectionOutline(properties.Designation, SectionFamily.CircularHollow, [outer, inner],
             new OutlinePoint(properties.CentroidX, properties.CentroidY),
             new OutlinePoint(properties.CentroidX + properties.X0, properties.CentroidY + properties.Y0),
