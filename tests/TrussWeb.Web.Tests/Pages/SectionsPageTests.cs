@@ -86,6 +86,8 @@ public class SectionsPageTests : TrussWebTestContext
         Assert.Equal(Display.Sig(entry.Properties.Rv) + " mm", ValueOf("rv"));
         Assert.Equal(Display.Sig(entry.Properties.J) + " mm⁴", ValueOf("J"));
         Assert.NotNull(cut.Find("[data-testid=section-path]"));
+        Assert.Equal(entry.Properties.Elements.Count, cut.FindAll("[data-testid=element-row]").Count);
+        Assert.Contains(Display.Sig(entry.Properties.Elements[0].Slenderness), cut.FindAll("[data-testid=element-row]")[0].TextContent);
     }
 
     [Fact]
