@@ -1,4 +1,5 @@
 using MudBlazor.Services;
+using TrussWeb.Web;
 using TrussWeb.Web.Components;
 
 var builder = WebApplication.CreateBuilder(args);
@@ -6,6 +7,7 @@ var builder = WebApplication.CreateBuilder(args);
 builder.Services.AddRazorComponents()
     .AddInteractiveServerComponents();
 builder.Services.AddMudServices();
+builder.Services.AddTrussWebCatalogue(builder.Configuration);
 
 var app = builder.Build();
 

@@ -1,0 +1,4 @@
+namespace TrussWeb.Web.Components.Truss;
+
+/// <summary>A node as drawn: id and position, m.</summary>
+public sealed record ElevationNode(string Id, double X, double Y, bool Supported);
