@@ -1,0 +1,145 @@
+using PdfSharp.Drawing;
+
+namespace TrussWeb.Reports.Pdf;
+
+/// <summary>Measures, wraps and shrinks text so that nothing runs past its box (XGraphics.MeasureString).</summary>
+internal static class TextLayout
+{
+    /// <summary>Line height of a font, pt.</summary>
+    public static double LineHeight(XFont font) => font.Size * 1.22;
+
+    /// <summary>Breaks <paramref name="text"/> into lines no wider than <paramref name="width"/>: at spaces, and inside a word only when the word alone is too wide.</summary>
+    public static List<string> Wrap(XGraphics g, string text, XFont font, double width)
+    {
+        var lines = new List<string>();
+        foreach (var paragraph in (text ?? "").Replace("\r", "", StringComparison.Ordinal).Split('\n'))
+        {
+            WrapParagraph(g, paragraph, font, width, lines);
+        }
+
+        return lines;
+    }
+
+    private static void WrapParagraph(XGraphics g, string paragraph, XFont font, double width, List<string> lines)
+    {
+        var words = paragraph.Split(' ', StringSplitOptions.RemoveEmptyEntries);
+        if (words.Length == 0)
+        {
+            lines.Add("");
+            return;
+        }
+
+        var current = "";
+        foreach (var word in words)
+        {
+            var candidate = current.Length == 0 ? word : current + " " + word;
+            if (Width(g, candidate, font) <= width)
+            {
+                current = candidate;
+                continue;
+            }
+
+            if (current.Length > 0)
+            {
+                lines.Add(current);
+                current = "";
+            }
+
+            if (Width(g, word, font) <= width)
+            {
+                current = word;
+                continue;
+            }
+
+            // A single word wider than the box: break it between characters.
+            var piece = "";
+            foreach (var ch in word)
+            {
+                if (piece.Length > 0 && Width(g, piece + ch, font) > width)
+                {
+                    lines.Add(piece);
+                    piece = "";
+                }
+
+                piece += ch;
+            }
+
+            current = piece;
+        }
+
+        if (current.Length > 0)
+        {
+            lines.Add(current);
+        }
+    }
+
+    public static double Width(XGraphics g, string text, XFont font) => text.Length == 0 ? 0 : g.MeasureString(text, font).Width;
+
+    /// <summary>Height the wrapped text takes, pt.</summary>
+    public static double Measure(XGraphics g, string text, XFont font, double width) => Wrap(g, text, font, width).Count * LineHeight(font);
+
+    /// <summary>Draws wrapped text with its top at <paramref name="y"/>; returns the height used.</summary>
+    public static double Draw(XGraphics g, string text, XFont font, XBrush brush, double x, double y, double width, XStringAlignment align = XStringAlignment.Near)
+    {
+        var lh = LineHeight(font);
+        var lines = Wrap(g, text, font, width);
+        for (var i = 0; i < lines.Count; i++)
+        {
+            DrawLine(g, lines[i], font, brush, x, y + (i * lh), width, align);
+        }
+
+        return lines.Count * lh;
+    }
+
+    /// <summary>Draws one line in a box of <paramref name="width"/>, top at <paramref name="y"/>.</summary>
+    public static void DrawLine(XGraphics g, string line, XFont font, XBrush brush, double x, double y, double width, XStringAlignment align = XStringAlignment.Near)
+    {
+        if (line.Length == 0)
+        {
+            return;
+        }
+
+        var w = Width(g, line, font);
+        var left = align switch
+        {
+            XStringAlignment.Far => x + width - w,
+            XStringAlignment.Center => x + ((width - w) / 2),
+            _ => x,
+        };
+        g.DrawString(line, font, brush, left, y, XStringFormats.TopLeft);
+    }
+
+    /// <summary>The largest font of <paramref name="family"/> (at most <paramref name="size"/>, at least <paramref name="minSize"/>) in which the text fits in one line.</summary>
+    public static XFont Fit(XGraphics g, string text, string family, double size, XFontStyleEx style, double width, double minSize)
+    {
+        var s = size;
+        var font = new XFont(family, s, style);
+        while (s > minSize && Width(g, text, font) > width)
+        {
+            s = Math.Max(minSize, s - 0.5);
+            font = new XFont(family, s, style);
+        }
+
+        return font;
+    }
+
+    /// <summary>
+    /// The largest font (down to <paramref name="minSize"/>) in which the text wraps into at most
+    /// <paramref name="maxLines"/> lines, with those lines.
+    /// </summary>
+    public static (XFont Font, List<string> Lines) FitLines(XGraphics g, string text, string family, double size, XFontStyleEx style, double width, int maxLines, double minSize)
+    {
+        var s = size;
+        while (true)
+        {
+            var font = new XFont(family, s, style);
+            var lines = Wrap(g, text, font, width);
+            if (lines.Count <= maxLines || s <= minSize)
+            {
+                return (font, lines);
+            }
+
+            s = Math.Max(minSize, s - 0.25);
+        }
+    }
+}
