@@ -1,5 +1,6 @@
 using UglyToad.PdfPig;
 using UglyToad.PdfPig.Content;
+using UglyToad.PdfPig.DocumentLayoutAnalysis.TextExtractor;
 
 namespace TrussWeb.Reports.Tests.Support;
 
@@ -12,7 +13,8 @@ public static class PdfText
         return doc.GetPages().Select(Text).ToList();
     }
 
-    public static string Text(Page page) => Normalise(string.Join(" ", page.GetWords().Select(w => w.Text)));
+    /// <summary>The page text in content-stream order (the order it was drawn: cell by cell), whitespace collapsed.</summary>
+    public static string Text(Page page) => Normalise(ContentOrderTextExtractor.GetText(page));
 
     public static string Normalise(string text) => string.Join(" ", text.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries));
 }
