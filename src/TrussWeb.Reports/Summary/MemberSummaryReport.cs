@@ -19,9 +19,9 @@ public static class MemberSummaryReport
 
     private static readonly TableColumn[] MemberColumns =
     [
-        new("Truss", 5), new("Mark", 4), new("Group", 6), new("Section", 10), new("Length (m)", 4.2, XStringAlignment.Far),
-        new("Max tension (kN)", 5.2, XStringAlignment.Far), new("Tension combination", 8), new("Max compression (kN)", 5.6, XStringAlignment.Far),
-        new("Compression combination", 8), new("Utilization", 5, XStringAlignment.Far), new("Governing check", 10), new("Status", 4.2),
+        new("Truss", 4.6), new("Mark", 3.8), new("Group", 6.8), new("Section", 10), new("Length (m)", 4.2, XStringAlignment.Far),
+        new("Max tension (kN)", 5.4, XStringAlignment.Far), new("Tension combination", 8), new("Max compression (kN)", 7, XStringAlignment.Far),
+        new("Compression combination", 8), new("Utilization", 6, XStringAlignment.Far), new("Governing check", 9.2), new("Status", 4.4),
         new("Connectors", 6), new("Review", 5.4), new("Mass (kg/m)", 4.4, XStringAlignment.Far),
     ];
 

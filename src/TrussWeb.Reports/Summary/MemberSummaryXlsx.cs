@@ -36,7 +36,7 @@ public static class MemberSummaryXlsx
                 data.AppendChild(Row(++rowIndex, Text(label), Text(value)));
             }
 
-            rowIndex++;
+            data.AppendChild(new Row { RowIndex = ++rowIndex });
             data.AppendChild(Row(++rowIndex, ExportHeaderBlock.MemberColumns.Select(Text).ToArray()));
             foreach (var r in table.Rows)
             {
@@ -46,14 +46,14 @@ public static class MemberSummaryXlsx
                     Text(r.ReviewState), Number(r.MassPerMetre)));
             }
 
-            rowIndex++;
+            data.AppendChild(new Row { RowIndex = ++rowIndex });
             data.AppendChild(Row(++rowIndex, ExportHeaderBlock.SectionColumns.Select(Text).ToArray()));
             foreach (var s in table.SectionTotals)
             {
                 data.AppendChild(Row(++rowIndex, Text(s.Truss), Text(s.Section), Number(s.Count), Number(s.LengthM), Number(s.MassKg)));
             }
 
-            rowIndex++;
+            data.AppendChild(new Row { RowIndex = ++rowIndex });
             data.AppendChild(Row(++rowIndex, ExportHeaderBlock.TrussColumns.Select(Text).ToArray()));
             foreach (var t in table.TrussTotals)
             {
