@@ -30,7 +30,7 @@ internal static class TrussDiagram
         XPoint P(Node n) => new(ox + ((n.X - minX) * s), oy - ((n.Y - minY) * s));
 
         var labelSize = Math.Clamp(s * 350, 4.2, 6.5);
-        var labelFont = new XFont(DejaVuFontResolver.Condensed, labelSize);
+        var labelFont = TextLayout.Font(DejaVuFontResolver.Condensed, Math.Round(labelSize * 4) / 4);
         var styles = model.Members.Select(m => (Member: m, Style: style(m))).ToList();
         foreach (var (m, st) in styles)
         {

@@ -29,48 +29,62 @@ internal static class TextLayout
             return;
         }
 
-        var current = "";
-        foreach (var word in words)
+        // Widths add up word by word (PDFsharp applies no kerning), so each word is measured once.
+        var space = Width(g, " ", font);
+        var start = 0;
+        var lineWidth = 0.0;
+        for (var i = 0; i < words.Length; i++)
         {
-            var candidate = current.Length == 0 ? word : current + " " + word;
-            if (Width(g, candidate, font) <= width)
+            var w = Width(g, words[i], font);
+            if (w > width)
             {
-                current = candidate;
-                continue;
-            }
-
-            if (current.Length > 0)
-            {
-                lines.Add(current);
-                current = "";
-            }
-
-            if (Width(g, word, font) <= width)
-            {
-                current = word;
-                continue;
-            }
-
-            // A single word wider than the box: break it between characters.
-            var piece = "";
-            foreach (var ch in word)
-            {
-                if (piece.Length > 0 && Width(g, piece + ch, font) > width)
+                if (i > start)
                 {
-                    lines.Add(piece);
-                    piece = "";
+                    lines.Add(string.Join(' ', words, start, i - start));
                 }
 
-                piece += ch;
+                lineWidth = BreakWord(g, words[i], font, width, lines, out var rest);
+                words[i] = rest;
+                start = i;
+                continue;
             }
 
-            current = piece;
+            var candidate = i == start ? w : lineWidth + space + w;
+            if (candidate <= width)
+            {
+                lineWidth = candidate;
+                continue;
+            }
+
+            lines.Add(string.Join(' ', words, start, i - start));
+            start = i;
+            lineWidth = w;
         }
 
-        if (current.Length > 0)
+        if (start < words.Length)
         {
-            lines.Add(current);
+            lines.Add(string.Join(' ', words, start, words.Length - start));
         }
+    }
+
+    /// <summary>Breaks a word wider than the box between characters; the last piece is returned to continue the line.</summary>
+    private static double BreakWord(XGraphics g, string word, XFont font, double width, List<string> lines, out string rest)
+    {
+        var piece = 0;
+        var begin = 0;
+        for (var k = 1; k <= word.Length; k++)
+        {
+            if (k - begin > 1 && Width(g, word[begin..k], font) > width)
+            {
+                lines.Add(word[begin..(k - 1)]);
+                begin = k - 1;
+            }
+
+            piece = k;
+        }
+
+        rest = word[begin..piece];
+        return Width(g, rest, font);
     }
 
     public static double Width(XGraphics g, string text, XFont font) => text.Length == 0 ? 0 : g.MeasureString(text, font).Width;
@@ -109,15 +123,21 @@ internal static class TextLayout
         g.DrawString(line, font, brush, left, y, XStringFormats.TopLeft);
     }
 
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<(string, double, XFontStyleEx), XFont> Fonts = new();
+
+    /// <summary>A font from the shared cache (XFont objects are immutable).</summary>
+    public static XFont Font(string family, double size, XFontStyleEx style = XFontStyleEx.Regular) =>
+        Fonts.GetOrAdd((family, size, style), k => new XFont(k.Item1, k.Item2, k.Item3));
+
     /// <summary>The largest font of <paramref name="family"/> (at most <paramref name="size"/>, at least <paramref name="minSize"/>) in which the text fits in one line.</summary>
     public static XFont Fit(XGraphics g, string text, string family, double size, XFontStyleEx style, double width, double minSize)
     {
         var s = size;
-        var font = new XFont(family, s, style);
+        var font = Font(family, s, style);
         while (s > minSize && Width(g, text, font) > width)
         {
             s = Math.Max(minSize, s - 0.5);
-            font = new XFont(family, s, style);
+            font = Font(family, s, style);
         }
 
         return font;
@@ -132,7 +152,7 @@ internal static class TextLayout
         var s = size;
         while (true)
         {
-            var font = new XFont(family, s, style);
+            var font = Font(family, s, style);
             var lines = Wrap(g, text, font, width);
             if (lines.Count <= maxLines || s <= minSize)
             {
