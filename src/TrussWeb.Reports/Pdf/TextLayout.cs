@@ -87,7 +87,34 @@ internal static class TextLayout
         return Width(g, rest, font);
     }
 
-    public static double Width(XGraphics g, string text, XFont font) => text.Length == 0 ? 0 : g.MeasureString(text, font).Width;
+    private const int WidthCacheLimit = 200_000;
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<(XFont Font, string Text), double> Widths = new();
+
+    /// <summary>
+    /// Width of one line of text, pt (XGraphics.MeasureString; the result depends only on font and text, so
+    /// it is cached: headers, footers and table words repeat on every page).
+    /// </summary>
+    public static double Width(XGraphics g, string text, XFont font)
+    {
+        if (text.Length == 0)
+        {
+            return 0;
+        }
+
+        if (Widths.TryGetValue((font, text), out var w))
+        {
+            return w;
+        }
+
+        if (Widths.Count > WidthCacheLimit)
+        {
+            Widths.Clear();
+        }
+
+        w = g.MeasureString(text, font).Width;
+        Widths.TryAdd((font, text), w);
+        return w;
+    }
 
     /// <summary>Height the wrapped text takes, pt.</summary>
     public static double Measure(XGraphics g, string text, XFont font, double width) => Wrap(g, text, font, width).Count * LineHeight(font);
@@ -113,11 +140,10 @@ internal static class TextLayout
             return;
         }
 
-        var w = Width(g, line, font);
         var left = align switch
         {
-            XStringAlignment.Far => x + width - w,
-            XStringAlignment.Center => x + ((width - w) / 2),
+            XStringAlignment.Far => x + width - Width(g, line, font),
+            XStringAlignment.Center => x + ((width - Width(g, line, font)) / 2),
             _ => x,
         };
         g.DrawString(line, font, brush, left, y, XStringFormats.TopLeft);
