@@ -51,6 +51,15 @@ internal sealed class TableWriter
     /// <summary>Writes the headings (also called automatically at the top of each new page).</summary>
     public void Header()
     {
+        if (_columns.All(c => c.Heading.Length == 0))
+        {
+            // A label/value table without headings.
+            _canvas.Ensure(14);
+            _headerOnPage = true;
+            _headerPage = _canvas.PageNumber;
+            return;
+        }
+
         var g = _canvas.G;
         var h = HeaderHeight(g);
         _canvas.Ensure(h + 14);
