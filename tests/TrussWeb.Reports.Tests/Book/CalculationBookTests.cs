@@ -10,7 +10,7 @@ namespace TrussWeb.Reports.Tests.Book;
 
 public class CalculationBookTests
 {
-    private static readonly Lazy<(IReadOnlyList<TrussReportData> Trusses, ReportHeader Header, Pdf.RenderedPdf Book, IReadOnlyList<string> Pages)> PartlyApproved = new(() =>
+    private static readonly Lazy<(IReadOnlyList<TrussReportData> Trusses, ReportHeader Header, TrussWeb.Reports.Pdf.RenderedPdf Book, IReadOnlyList<string> Pages)> PartlyApproved = new(() =>
     {
         var trusses = ReportFixture.WithReviews([ReportFixture.Pratt24], (_, i) => i % 4 == 1 ? "Returned" : "Approved");
         var header = ReportFixture.Header(trusses, final: true);
@@ -154,13 +154,13 @@ public class CalculationBookTests
     public void Missing_font_folder_fails_with_a_message_naming_the_folder()
     {
         var folder = Path.Combine(Path.GetTempPath(), "no-fonts-" + Guid.NewGuid().ToString("N"));
-        var ex = Assert.Throws<FileNotFoundException>(() => new Pdf.DejaVuFontResolver(folder));
+        var ex = Assert.Throws<FileNotFoundException>(() => new TrussWeb.Reports.Pdf.DejaVuFontResolver(folder));
         Assert.Contains(folder, ex.Message, StringComparison.Ordinal);
         Assert.Contains("DejaVuSans.ttf", ex.Message, StringComparison.Ordinal);
     }
 
     /// <summary>The text of a member's sheet: from its contents page up to the next entry's page.</summary>
-    private static string SheetText(Pdf.RenderedPdf book, IReadOnlyList<string> pages, string mark)
+    private static string SheetText(TrussWeb.Reports.Pdf.RenderedPdf book, IReadOnlyList<string> pages, string mark)
     {
         var entries = book.Contents.ToList();
         var i = entries.FindIndex(e => e.Member == mark);
