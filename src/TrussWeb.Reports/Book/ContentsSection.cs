@@ -29,7 +29,10 @@ internal static class ContentsSection
         var first = c.Document.PageCount;
         for (var i = 0; i < pages; i++)
         {
+            // The title is drawn now so that no page is left with an empty content stream (poppler rejects
+            // an empty compressed stream); the entries follow in Fill.
             c.NewPage();
+            c.G.DrawString(i == 0 ? "Contents" : "Contents (continued)", c.Style.Heading, ReportStyle.InkBrush, c.Left, c.Top, XStringFormats.TopLeft);
         }
 
         return first;
@@ -43,9 +46,7 @@ internal static class ContentsSection
         for (var p = 0; p * perPage < Math.Max(entries.Count, 1); p++)
         {
             using var g = XGraphics.FromPdfPage(c.Document.Pages[firstPageIndex + p], XGraphicsPdfPageOptions.Append);
-            var y = c.Top;
-            g.DrawString(p == 0 ? "Contents" : "Contents (continued)", style.Heading, ReportStyle.InkBrush, c.Left, y, XStringFormats.TopLeft);
-            y += TitleSpace;
+            var y = c.Top + TitleSpace;
             foreach (var e in entries.Skip(p * perPage).Take(perPage))
             {
                 var member = e.Member.Length > 0;
