@@ -59,6 +59,7 @@ public class MemberSummaryReportTests
         var trusses = new[] { StressCase.Truss };
         var longest = StressCase.LongestSection().Designation;
         var pdf = MemberSummaryReport.Render(ReportFixture.Header(trusses), trusses);
+        Samples.Write("summary-stress.pdf", pdf.Bytes);
         var text = string.Join(" ", PdfText.Pages(pdf.Bytes));
         var force = trusses[0].Design.Members.Max(m => m.Envelope.MaxCompression) / 1000;
         Assert.True(force >= 10_000, $"stress case needs 5-digit forces, got {force} kN");
@@ -85,8 +86,9 @@ public class MemberSummaryReportTests
             }
         }
 
-        // The longest designation is printed whole (wrapped at its spaces if need be).
+        // The longest designations are printed whole (wrapped at their spaces if need be).
         Assert.Contains(PdfText.Normalise(longest), text, StringComparison.Ordinal);
+        Assert.Contains(PdfText.Normalise(StressCase.LongestDoubleAngle().Designation), text, StringComparison.Ordinal);
     }
 
     private static bool Overlap(PdfRectangle a, PdfRectangle b)
