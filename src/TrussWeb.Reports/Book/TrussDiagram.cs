@@ -54,6 +54,7 @@ internal static class TrussDiagram
             }
         }
 
+        var placed = new List<XRect>(styles.Count);
         foreach (var (m, st) in styles)
         {
             if (st.Label.Length == 0 || !nodes.TryGetValue(m.StartNode, out var a) || !nodes.TryGetValue(m.EndNode, out var b))
@@ -61,11 +62,9 @@ internal static class TrussDiagram
                 continue;
             }
 
-            var pa = P(a);
-            var pb = P(b);
-            var mid = new XPoint((pa.X + pb.X) / 2, (pa.Y + pb.Y) / 2);
             var size = g.MeasureString(st.Label, labelFont);
-            var box = new XRect(mid.X - (size.Width / 2) - 0.8, mid.Y - (size.Height / 2), size.Width + 1.6, size.Height);
+            var box = LabelBox(P(a), P(b), size, placed);
+            placed.Add(box);
             g.DrawRectangle(new XSolidBrush(XColor.FromArgb(235, 255, 255, 255)), box);
             g.DrawString(st.Label, labelFont, new XSolidBrush(st.LabelColour), box.X + 0.8, box.Y, XStringFormats.TopLeft);
         }
@@ -75,6 +74,30 @@ internal static class TrussDiagram
         TextLayout.DrawLine(g, scaleText, c.Style.Label, ReportStyle.GreyBrush, c.Left, c.Y + height - 7, c.Width, XStringAlignment.Far);
         return height;
     }
+
+    /// <summary>Where along its member a label goes: the middle, else the first of a few points along the member where it overlaps no label placed before.</summary>
+    private static XRect LabelBox(XPoint a, XPoint b, XSize size, List<XRect> placed)
+    {
+        XRect At(double t)
+        {
+            var x = a.X + ((b.X - a.X) * t);
+            var y = a.Y + ((b.Y - a.Y) * t);
+            return new XRect(x - (size.Width / 2) - 0.8, y - (size.Height / 2), size.Width + 1.6, size.Height);
+        }
+
+        foreach (var t in AlongMember)
+        {
+            var box = At(t);
+            if (!placed.Exists(p => p.IntersectsWith(box)))
+            {
+                return box;
+            }
+        }
+
+        return At(0.5);
+    }
+
+    private static readonly double[] AlongMember = [0.5, 0.38, 0.62, 0.27, 0.73];
 
     private static void Supports(XGraphics g, TrussModel model, Dictionary<string, Node> nodes, Func<Node, XPoint> at)
     {
