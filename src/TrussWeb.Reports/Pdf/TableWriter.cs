@@ -103,9 +103,10 @@ internal sealed class TableWriter
         }
 
         height += 2 * Pad;
-        if (_canvas.Y + height > _canvas.Bottom || !_headerOnPage || _headerPage != _canvas.PageNumber)
+        var fitsOnAFreshPage = height <= _canvas.Bottom - _canvas.Top - HeaderHeight(g);
+        if ((_canvas.Y + height > _canvas.Bottom && fitsOnAFreshPage) || !_headerOnPage || _headerPage != _canvas.PageNumber)
         {
-            if (_canvas.Y + height > _canvas.Bottom)
+            if (_canvas.Y + height > _canvas.Bottom && fitsOnAFreshPage)
             {
                 _canvas.NewPage();
             }
@@ -113,7 +114,62 @@ internal sealed class TableWriter
             Header();
         }
 
-        g = _canvas.G;
+        // A row taller than what is left of a fresh page is split: each part carries as many lines of
+        // every cell as fit, and the rest continues under the repeated headings on the next page.
+        var next = new int[laid.Count];
+        while (true)
+        {
+            var available = _canvas.Bottom - _canvas.Y - (2 * Pad);
+            var take = new int[laid.Count];
+            var partHeight = 0.0;
+            var more = false;
+            for (var i = 0; i < laid.Count; i++)
+            {
+                var h = 0.0;
+                var k = next[i];
+                while (k < laid[i].Count && h + TextLayout.LineHeight(laid[i][k].Font) <= available)
+                {
+                    h += TextLayout.LineHeight(laid[i][k].Font);
+                    k++;
+                }
+
+                take[i] = k;
+                more |= k < laid[i].Count;
+                partHeight = Math.Max(partHeight, h);
+            }
+
+            if (more && take.SequenceEqual(next))
+            {
+                // Not even one line fits (cannot happen on a fresh A4 page; guards the loop).
+                for (var i = 0; i < laid.Count; i++)
+                {
+                    if (take[i] < laid[i].Count)
+                    {
+                        partHeight = Math.Max(partHeight, TextLayout.LineHeight(laid[i][take[i]].Font));
+                        take[i]++;
+                    }
+                }
+
+                more = take.Select((k, i) => k < laid[i].Count).Any(x => x);
+            }
+
+            DrawPart(laid, next, take, partHeight + (2 * Pad), fill);
+            if (!more)
+            {
+                break;
+            }
+
+            next = take;
+            _canvas.NewPage();
+            Header();
+        }
+
+        _row++;
+    }
+
+    private void DrawPart(List<List<(string Line, XFont Font, XBrush Brush)>> laid, int[] from, int[] to, double height, XBrush? fill)
+    {
+        var g = _canvas.G;
         var y = _canvas.Y;
         if (fill is not null)
         {
@@ -121,23 +177,26 @@ internal sealed class TableWriter
         }
         else if (_row % 2 == 1)
         {
-            g.DrawRectangle(new XSolidBrush(XColor.FromArgb(246, 247, 249)), Left, y, Width, height);
+            g.DrawRectangle(AlternateRow, Left, y, Width, height);
         }
 
         for (var i = 0; i < laid.Count; i++)
         {
             var ly = y + Pad;
-            foreach (var (line, f, b) in laid[i])
+            for (var k = from[i]; k < to[i]; k++)
             {
+                var (line, f, b) = laid[i][k];
                 TextLayout.DrawLine(g, line, f, b, _x[i] + Pad, ly, ColumnWidth(i), _columns[i].Align);
                 ly += TextLayout.LineHeight(f);
             }
         }
 
-        g.DrawLine(new XPen(ReportStyle.Rule, 0.3), Left, y + height, Left + Width, y + height);
+        g.DrawLine(RowRule, Left, y + height, Left + Width, y + height);
         _canvas.Y += height;
-        _row++;
     }
+
+    private static readonly XBrush AlternateRow = new XSolidBrush(XColor.FromArgb(246, 247, 249));
+    private static readonly XPen RowRule = new(ReportStyle.Rule, 0.3);
 
     /// <summary>Ends the table with a little space.</summary>
     public void End(double space = 6) => _canvas.Space(space);
