@@ -45,7 +45,7 @@ internal static class PageFrame
         var project = $"{h.ProjectName} ({h.ProjectNumber})" + (h.Client.Length > 0 ? $" · {h.Client}" : "");
         var f1 = TextLayout.Fit(g, project, DejaVuFontResolver.Sans, 9, XFontStyleEx.Bold, leftWidth, 5.5);
         TextLayout.DrawLine(g, Clip(g, project, f1, leftWidth), f1, ReportStyle.InkBrush, c.Left, y, leftWidth);
-        var rev = $"{documentTitle} · Rev {h.Revision}";
+        var rev = $"{documentTitle} · Rev {h.Revision} · {h.ProducedDateText}";
         var f1r = TextLayout.Fit(g, rev, DejaVuFontResolver.Sans, 9, XFontStyleEx.Bold, rightWidth, 5.5);
         TextLayout.DrawLine(g, Clip(g, rev, f1r, rightWidth), f1r, ReportStyle.InkBrush, c.Left + leftWidth + 8, y, rightWidth, XStringAlignment.Far);
         y += 12;

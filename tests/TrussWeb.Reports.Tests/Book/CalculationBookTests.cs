@@ -143,7 +143,7 @@ public class CalculationBookTests
             var box = page.MediaBox.Bounds;
             foreach (var letter in page.Letters.Where(l => !string.IsNullOrWhiteSpace(l.Value)))
             {
-                var r = letter.GlyphRectangle;
+                var r = letter.BoundingBox;
                 Assert.True(r.Left >= box.Left - 0.01 && r.Right <= box.Right + 0.01 && r.Bottom >= box.Bottom - 0.01 && r.Top <= box.Top + 0.01,
                     string.Create(CultureInfo.InvariantCulture, $"page {page.Number}: '{letter.Value}' at {r.Left:F1},{r.Bottom:F1}-{r.Right:F1},{r.Top:F1} outside {box.Width:F0}x{box.Height:F0}"));
             }

@@ -32,7 +32,7 @@ public class SectionFamiliesTests
 
         using var doc = PdfDocument.Open(book.Bytes);
         Assert.All(doc.GetPages(), p => Assert.All(p.Letters, l =>
-            Assert.True(l.GlyphRectangle.Right <= p.MediaBox.Bounds.Right + 0.01 && l.GlyphRectangle.Left >= -0.01, $"page {p.Number}: '{l.Value}' outside")));
+            Assert.True(l.BoundingBox.Right <= p.MediaBox.Bounds.Right + 0.01 && l.BoundingBox.Left >= -0.01, $"page {p.Number}: '{l.Value}' outside")));
     }
 
     [Fact]

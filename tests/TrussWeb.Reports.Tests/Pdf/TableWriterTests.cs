@@ -29,6 +29,6 @@ public class TableWriterTests
         }
 
         using var doc = UglyToad.PdfPig.PdfDocument.Open(stream.ToArray());
-        Assert.All(doc.GetPages(), p => Assert.All(p.Letters, l => Assert.True(l.GlyphRectangle.Bottom >= 20, $"page {p.Number}: '{l.Value}' runs into the bottom margin")));
+        Assert.All(doc.GetPages(), p => Assert.All(p.Letters, l => Assert.True(l.BoundingBox.Bottom >= 20, $"page {p.Number}: '{l.Value}' runs into the bottom margin")));
     }
 }
