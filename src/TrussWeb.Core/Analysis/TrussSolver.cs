@@ -16,6 +16,9 @@ namespace TrussWeb.Core.Analysis;
 /// </summary>
 public static class TrussSolver
 {
+    /// <summary>Relative size below which a member force is round-off and is shown as zero (2026-12-01 choice: far above double precision noise, far below any design force).</summary>
+    public const double RoundOffRelative = 1e-12;
+
     /// <summary>As <see cref="Analyse"/>, but returns the issues instead of throwing when the input is invalid.</summary>
     public static bool TryAnalyse(TrussModel model, IReadOnlyList<LoadCase> cases, IReadOnlyList<LoadCombination> combinations, AnalysisOptions options,
         out AnalysisResult? result, out IReadOnlyList<ValidationIssue> issues)
@@ -89,7 +92,7 @@ public static class TrussSolver
 
         Guard.ThrowIfAny(issues);
 
-        var raw = cases.Select(c => SolveCase(system, c)).ToList();
+        var raw = cases.Select(c => SolveCase(system, c).WithRoundOffRemoved()).ToList();
         var caseResults = raw.Select((r, i) => ToResult(model, system, cases[i].Id, null, r)).ToList();
         var comboResults = new List<LoadResult>(combinations.Count);
         var comboRaw = new List<Raw>(combinations.Count);
@@ -105,6 +108,7 @@ public static class TrussSolver
                 }
             }
 
+            r = r.WithRoundOffRemoved();
             comboRaw.Add(r);
             comboResults.Add(ToResult(model, system, combo.Name, combo.LimitState, r));
         }
@@ -126,6 +130,31 @@ public static class TrussSolver
         public double[] Load { get; } = load;
 
         public double[] Forces { get; } = forces;
+
+        /// <summary>
+        /// Member forces whose magnitude is below <see cref="RoundOffRelative"/> of the largest force of
+        /// the same case are set to zero: they are round-off of the solution (2026-12-01: a zero-force
+        /// member came out as 1e-11 N and was then checked in compression), not forces.
+        /// </summary>
+        public Raw WithRoundOffRemoved()
+        {
+            var max = 0.0;
+            foreach (var f in Forces)
+            {
+                max = Math.Max(max, Math.Abs(f));
+            }
+
+            var floor = max * RoundOffRelative;
+            for (var i = 0; i < Forces.Length; i++)
+            {
+                if (Math.Abs(Forces[i]) <= floor)
+                {
+                    Forces[i] = 0;
+                }
+            }
+
+            return this;
+        }
 
         public static Raw Zero(int nodes, int members) => new(new double[2 * nodes], new double[2 * nodes], new double[members]);
 

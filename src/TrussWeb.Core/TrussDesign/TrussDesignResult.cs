@@ -18,6 +18,9 @@ public sealed record TrussDesignResult(
     double MassWithAllowance,
     IReadOnlyList<SectionTotal> Totals)
 {
+    /// <summary>The load cases the analysis used (self-weight from the sections included), N at nodes.</summary>
+    public IReadOnlyList<Loads.LoadCase> LoadCases { get; init; } = [];
+
     /// <summary>Largest member utilization.</summary>
     public double MaxUtilization => Members.Count == 0 ? 0 : Members.Max(m => m.Design.Utilization);
 }

@@ -86,8 +86,13 @@ public static class TrussDesigner
             var envelope = analysis.EnvelopeOf(member.Id);
             var forces = envelope.ToMemberForces();
             var result = input.Standard.CheckMember(designMember, forces, withRecords);
-            outcomes.Add(new MemberOutcome(member.Id, member.Group, model.LengthOf(member), envelope, designMember.Lengths, result,
-                GoverningCombination(input.Standard, designMember, forces)));
+            var length = model.LengthOf(member);
+            outcomes.Add(new MemberOutcome(member.Id, member.Group, length, envelope, designMember.Lengths, result,
+                GoverningCombination(input.Standard, designMember, forces))
+            {
+                Section = section,
+                Mass = length / 1000 * section.MassPerMetre,
+            });
         }
 
         var status = outcomes.Any(o => o.Design.Status == CheckStatus.Fail) || analysis.Deflections.Any(d => !d.Passes)
@@ -95,11 +100,14 @@ public static class TrussDesigner
             : outcomes.Any(o => o.Design.Status == CheckStatus.OutOfScope) ? CheckStatus.OutOfScope : CheckStatus.Pass;
         var totals = outcomes
             .GroupBy(o => sections[o.Mark].Designation, StringComparer.Ordinal)
-            .Select(g => new SectionTotal(g.Key, g.Count(), g.Sum(o => o.Length), g.Sum(o => o.Length * sections[o.Mark].MassPerMetre / 1000)))
+            .Select(g => new SectionTotal(g.Key, g.Count(), g.Sum(o => o.Length), g.Sum(o => o.Mass)))
             .OrderBy(t => t.Designation, StringComparer.Ordinal)
             .ToList();
         var mass = totals.Sum(t => t.Mass);
-        return new TrussDesignResult(analysis, outcomes, loads.Warnings, status, mass, mass * input.Actions.ConnectionAllowance, totals);
+        return new TrussDesignResult(analysis, outcomes, loads.Warnings, status, mass, mass * input.Actions.ConnectionAllowance, totals)
+        {
+            LoadCases = loads.Cases,
+        };
     }
 
     /// <summary>The section a member uses: its own override, else its group's.</summary>

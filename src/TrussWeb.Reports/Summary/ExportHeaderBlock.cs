@@ -28,7 +28,7 @@ internal static class ExportHeaderBlock
     [
         "Truss", "Mark", "Group", "Section", "Length (m)", "Max tension (kN)", "Tension combination",
         "Max compression (kN)", "Compression combination", "Utilization (-)", "Governing check", "Status",
-        "Intermediate connectors (-)", "Connector spacing (mm)", "Review state", "Mass per metre (kg/m)",
+        "Intermediate connectors (-)", "Connector spacing (mm)", "Review state", "Mass (kg)",
     ];
 
     public static readonly string[] SectionColumns = ["Truss", "Section", "Members (-)", "Length (m)", "Mass (kg)"];

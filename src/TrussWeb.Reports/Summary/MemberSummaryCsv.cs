@@ -31,7 +31,7 @@ public static class MemberSummaryCsv
         {
             Line(sb, r.Truss, r.Mark, r.Group, r.Section, N(r.LengthM), N(r.MaxTensionKN), r.TensionCombination, N(r.MaxCompressionKN),
                 r.CompressionCombination, N(r.Utilization), r.GoverningCheck, r.Status.ToString(),
-                r.ConnectorCount?.ToString(CultureInfo.InvariantCulture) ?? "", r.ConnectorSpacingMm is { } a ? N(a) : "", r.ReviewState, N(r.MassPerMetre));
+                r.ConnectorCount?.ToString(CultureInfo.InvariantCulture) ?? "", r.ConnectorSpacingMm is { } a ? N(a) : "", r.ReviewState, N(r.MassKg));
         }
 
         sb.Append("\r\n");

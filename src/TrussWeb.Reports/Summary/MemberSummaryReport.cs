@@ -22,7 +22,7 @@ public static class MemberSummaryReport
         new("Truss", 4.6), new("Mark", 3.8), new("Group", 6.8), new("Section", 10), new("Length (m)", 4.2, XStringAlignment.Far),
         new("Max tension (kN)", 5.4, XStringAlignment.Far), new("Tension combination", 8), new("Max compression (kN)", 7, XStringAlignment.Far),
         new("Compression combination", 8), new("Utilization", 6, XStringAlignment.Far), new("Governing check", 9.2), new("Status", 4.4),
-        new("Connectors", 6), new("Review", 5.4), new("Mass (kg/m)", 4.4, XStringAlignment.Far),
+        new("Connectors", 6), new("Review", 5.4), new("Mass (kg)", 4.4, XStringAlignment.Far),
     ];
 
     /// <summary>Renders the summary.</summary>
@@ -67,7 +67,7 @@ public static class MemberSummaryReport
                 r.Truss, r.Mark, r.Group, r.Section, Display.Sig(r.LengthM), Force(r.MaxTensionKN), r.TensionCombination,
                 Force(r.MaxCompressionKN), r.CompressionCombination,
                 TableCell.Of((Display.Sig(r.Utilization), fail ? c.Style.TableBold : null, null)), r.GoverningCheck,
-                TableCell.Of((StatusText(r.Status), fail ? c.Style.TableBold : null, null)), r.ConnectorText, r.ReviewState, Display.Sig(r.MassPerMetre),
+                TableCell.Of((StatusText(r.Status), fail ? c.Style.TableBold : null, null)), r.ConnectorText, r.ReviewState, Display.Sig(r.MassKg),
             ]);
         }
 

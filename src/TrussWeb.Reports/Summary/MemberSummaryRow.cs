@@ -4,7 +4,7 @@ namespace TrussWeb.Reports.Summary;
 
 /// <summary>
 /// One member of the summary as all three exports print it. Values are unrounded, in the display
-/// units named in each property (kN, m, kg/m); the PDF formats them with <see cref="Display"/>.
+/// units named in each property (kN, m, kg); the PDF formats them with <see cref="Display"/>.
 /// </summary>
 public sealed record MemberSummaryRow(
     string Truss,
@@ -22,7 +22,7 @@ public sealed record MemberSummaryRow(
     int? ConnectorCount,
     double? ConnectorSpacingMm,
     string ReviewState,
-    double MassPerMetre)
+    double MassKg)
 {
     /// <summary>Connectors as printed: "3 @ 1350 mm", "@ 1350 mm" or "" for members without.</summary>
     public string ConnectorText => ConnectorSpacingMm is { } a

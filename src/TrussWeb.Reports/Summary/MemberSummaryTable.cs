@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Text.RegularExpressions;
 using TrussWeb.Core.Records;
 using TrussWeb.Core.Sections;
 using TrussWeb.Reports.Model;
@@ -10,7 +9,7 @@ namespace TrussWeb.Reports.Summary;
 /// The rows and totals of the member summary, read from the design results (never recomputed), so
 /// that the PDF, the CSV and the XLSX print the same numbers.
 /// </summary>
-public sealed partial class MemberSummaryTable
+public sealed class MemberSummaryTable
 {
     private MemberSummaryTable(IReadOnlyList<MemberSummaryRow> rows, IReadOnlyList<SectionTotalRow> sections, IReadOnlyList<TrussTotalRow> trusses)
     {
@@ -43,7 +42,7 @@ public sealed partial class MemberSummaryTable
                     m.Envelope.MaxTension / 1000, m.Envelope.TensionCombination ?? "",
                     m.Envelope.MaxCompression / 1000, m.Envelope.CompressionCombination ?? "",
                     m.Design.Utilization, m.Design.GoverningCheck, m.Design.Status, count, spacing,
-                    t.ReviewOf(m.Mark).State, section?.MassPerMetre ?? double.NaN));
+                    t.ReviewOf(m.Mark).State, m.Mass));
             }
 
             sections.AddRange(t.Design.Totals.Select(x => new SectionTotalRow(t.Name, x.Designation, x.Count, x.Length / 1000, x.Mass)));
@@ -55,7 +54,7 @@ public sealed partial class MemberSummaryTable
 
     /// <summary>
     /// Connector spacing (step "a" of the built-up check) and the number of intermediate connectors
-    /// as the record states it (in the step's description), else as the group gives it. Null for
+    /// as the record states it (step "n"), else as the group gives it. Null for
     /// members that are not built up or whose record has no connector step (never in compression).
     /// </summary>
     internal static (int? Count, double? Spacing) Connectors(CalcRecord? record, SectionProperties? section, int? givenCount)
@@ -71,11 +70,9 @@ public sealed partial class MemberSummaryTable
             return (null, null);
         }
 
-        var match = CountPattern().Match(step.Description);
-        int? count = match.Success ? int.Parse(match.Groups[1].Value, CultureInfo.InvariantCulture) : givenCount;
+        var n = record.Steps.LastOrDefault(s => s.Symbol == "n");
+        int? count = n is not null ? (int)Math.Round(n.Value) : givenCount;
         return (count, step.Value);
     }
 
-    [GeneratedRegex(@"(\d+) intermediate connector")]
-    private static partial Regex CountPattern();
 }

@@ -43,7 +43,7 @@ public static class MemberSummaryXlsx
                 data.AppendChild(Row(++rowIndex, Text(r.Truss), Text(r.Mark), Text(r.Group), Text(r.Section), Number(r.LengthM), Number(r.MaxTensionKN),
                     Text(r.TensionCombination), Number(r.MaxCompressionKN), Text(r.CompressionCombination), Number(r.Utilization), Text(r.GoverningCheck),
                     Text(r.Status.ToString()), r.ConnectorCount is { } n ? Number(n) : Text(""), r.ConnectorSpacingMm is { } a ? Number(a) : Text(""),
-                    Text(r.ReviewState), Number(r.MassPerMetre)));
+                    Text(r.ReviewState), Number(r.MassKg)));
             }
 
             data.AppendChild(new Row { RowIndex = ++rowIndex });

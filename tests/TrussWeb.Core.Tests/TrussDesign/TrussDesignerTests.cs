@@ -80,6 +80,37 @@ public class TrussDesignerTests
     }
 
     [Fact]
+    public void Member_masses_add_up_to_the_section_totals_and_the_result_keeps_its_load_cases()
+    {
+        var result = TrussDesigner.Design(Input(Pratt24(), size: false));
+
+        foreach (var total in result.Totals)
+        {
+            AssertClose.Relative(total.Mass, result.Members.Where(m => m.Section!.Designation == total.Designation).Sum(m => m.Mass), 1e-12, total.Designation);
+        }
+
+        Assert.Contains(result.LoadCases, c => c.Kind == Core.Loads.LoadKind.Wind);
+        Assert.Contains(result.LoadCases, c => c.Kind == Core.Loads.LoadKind.Permanent);
+    }
+
+    [Fact]
+    public void A_member_with_no_force_in_any_combination_gets_exactly_zero_not_round_off()
+    {
+        // Source: common practice (statics): at the top heel node of a pitched truss whose end vertical
+        // rises from the support, the first top chord member is the only member with a horizontal
+        // component, so with vertical and slope-normal loads only its force is what equilibrium leaves.
+        // Here: every member whose envelope is tiny is exactly zero, never 1e-11 N of round-off.
+        var result = TrussDesigner.Design(Input(Pratt24(), size: false));
+
+        var largest = result.Members.Max(m => Math.Max(m.Envelope.MaxTension, m.Envelope.MaxCompression));
+        Assert.All(result.Members, m =>
+        {
+            Assert.True(m.Envelope.MaxCompression == 0 || m.Envelope.MaxCompression > largest * 1e-12, $"{m.Mark} compression {m.Envelope.MaxCompression}");
+            Assert.True(m.Envelope.MaxTension == 0 || m.Envelope.MaxTension > largest * 1e-12, $"{m.Mark} tension {m.Envelope.MaxTension}");
+        });
+    }
+
+    [Fact]
     public void A_group_without_a_section_is_reported_by_name()
     {
         var input = Input(Pratt24(), size: false);

@@ -94,6 +94,9 @@ public static class BuiltUp
                 : $"Proposed connector layout: {count} intermediate connector(s) at equal spaces of {Display.S(a)} mm; rounding down to {Display.S(rounded)} mm (50 mm module) would leave unequal spaces, so the exact equal spacing is used.");
         }
 
+        record?.Add("n", "Number of intermediate connectors", connectors?.IntermediateCount is null ? "⌈L / a⌉ − 1" : "n (given)",
+            connectors?.IntermediateCount is null ? $"⌈{Display.S(length)} / {Display.S(proposed ? aMax : a)}⌉ − 1" : count.ToString(System.Globalization.CultureInfo.InvariantCulture),
+            count, "", Sans10162References.BuiltUp);
         record?.Note($"Connectors set out along the member's node-to-node length L = {Display.S(length)} mm.");
         return new ConnectorSpacing(length, count, a, aMax, governing, ri, proposed);
     }
