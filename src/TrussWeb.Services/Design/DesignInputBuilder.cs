@@ -166,19 +166,7 @@ internal static class DesignInputBuilder
             }
         }
 
-        var nodes = truss.Nodes.OrderBy(n => n.Label, StringComparer.Ordinal).ToList();
-        var model = new TrussModel
-        {
-            Name = truss.Name,
-            Nodes = nodes.Select(n => new Node(n.Label, n.XMm, n.YMm)).ToList(),
-            Members = members,
-            Supports = nodes.Where(n => n.Support is not null).Select(n => new Support(n.Label, (CoreSupportKind)(int)n.Support!.Kind)).ToList(),
-            Groups = coreGroups,
-            LateralRestraints = nodes.Where(n => n.IsLaterallyRestrained).Select(n => n.Label).ToList(),
-            PurlinNodes = nodes.Where(n => n.IsPurlinPoint).Select(n => n.Label).ToList(),
-            Span = truss.SpanMm,
-            TrussSpacing = truss.SpacingMm,
-        };
+        var model = BuildModel(truss);
         issues.AddRange(TrussModelValidator.Validate(model));
 
         var actions = ToAreaActions(truss, nodeLabel);
@@ -211,6 +199,29 @@ internal static class DesignInputBuilder
 
         return (new DesignContext(truss, project, input, resolver, groupSections, memberSections, connectors,
             truss.Members.ToDictionary(m => m.Mark, StringComparer.Ordinal), grade), []);
+    }
+
+    /// <summary>The Core model of the stored geometry (nodes by label, members by mark, group roles).</summary>
+    public static TrussModel BuildModel(Truss truss)
+    {
+        var nodeLabel = truss.Nodes.ToDictionary(n => n.Id, n => n.Label);
+        var groupNames = truss.Groups.ToDictionary(g => g.Id, g => g.Name);
+        var nodes = truss.Nodes.OrderBy(n => n.Label, StringComparer.Ordinal).ToList();
+        return new TrussModel
+        {
+            Name = truss.Name,
+            Nodes = nodes.Select(n => new Node(n.Label, n.XMm, n.YMm)).ToList(),
+            Members = truss.Members.OrderBy(m => m.Mark, StringComparer.Ordinal)
+                .Select(m => new Member(m.Mark, nodeLabel.GetValueOrDefault(m.StartNodeId, "?"), nodeLabel.GetValueOrDefault(m.EndNodeId, "?"), groupNames.GetValueOrDefault(m.GroupId, "?")))
+                .ToList(),
+            Supports = nodes.Where(n => n.Support is not null).Select(n => new Support(n.Label, (CoreSupportKind)(int)n.Support!.Kind)).ToList(),
+            Groups = truss.Groups.OrderBy(g => g.Name, StringComparer.Ordinal)
+                .Select(g => new CoreGroup(g.Name, Enum.TryParse<MemberRole>(g.Role, ignoreCase: true, out var r) ? r : MemberRole.Web)).ToList(),
+            LateralRestraints = nodes.Where(n => n.IsLaterallyRestrained).Select(n => n.Label).ToList(),
+            PurlinNodes = nodes.Where(n => n.IsPurlinPoint).Select(n => n.Label).ToList(),
+            Span = truss.SpanMm,
+            TrussSpacing = truss.SpacingMm,
+        };
     }
 
     public static AreaActions ToAreaActions(Truss truss, IReadOnlyDictionary<Guid, string> nodeLabel)
