@@ -17,7 +17,7 @@ echo "== build (Release)"
 dotnet build TrussWeb.sln -c Release -nologo -v quiet
 
 echo "== unit tests"
-for project in tests/TrussWeb.Core.Tests tests/TrussWeb.Data.Tests; do
+for project in tests/TrussWeb.Core.Tests tests/TrussWeb.Data.Tests tests/TrussWeb.Services.Tests; do
   dotnet test "$project" -c Release --no-build -nologo --logger "console;verbosity=minimal"
 done
 
