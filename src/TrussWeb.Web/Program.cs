@@ -10,6 +10,10 @@ using TrussWeb.Services.Hosting;
 using TrussWeb.Web.Components;
 
 var builder = WebApplication.CreateBuilder(args);
+if (AdminCommands.IsVerb(args))
+{
+    builder.Logging.SetMinimumLevel(LogLevel.Warning);
+}
 
 builder.Services.AddRazorComponents()
     .AddInteractiveServerComponents();

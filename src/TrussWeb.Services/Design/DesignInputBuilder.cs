@@ -81,16 +81,13 @@ internal static class DesignInputBuilder
         var resolver = new SectionResolver(catalogue);
         var groupSections = new Dictionary<string, ResolvedSection?>(StringComparer.Ordinal);
         var settings = new Dictionary<string, GroupDesignSettings>(StringComparer.Ordinal);
-        var coreGroups = new List<CoreGroup>();
-        foreach (var (g, i) in truss.Groups.OrderBy(g => g.Name, StringComparer.Ordinal).Select((g, i) => (g, i)))
+        foreach (var g in truss.Groups.OrderBy(g => g.Name, StringComparer.Ordinal))
         {
-            if (!Enum.TryParse<MemberRole>(g.Role, ignoreCase: true, out var role))
+            if (!Enum.TryParse<MemberRole>(g.Role, ignoreCase: true, out _))
             {
                 issues.Add(new ValidationIssue($"Groups[{g.Name}].Role", $"unknown role '{g.Role}'; use one of {string.Join(", ", Enum.GetNames<MemberRole>())}"));
-                role = MemberRole.Web;
             }
 
-            coreGroups.Add(new CoreGroup(g.Name, role));
             var orientation = ParseOrientation(g.BackToBackOrientation);
             ResolvedSection? section = null;
             if (!string.IsNullOrWhiteSpace(g.SectionDesignation))
@@ -130,15 +127,11 @@ internal static class DesignInputBuilder
             };
         }
 
-        var groupNames = truss.Groups.ToDictionary(g => g.Id, g => g.Name);
-        var members = new List<Member>();
         var memberSections = new Dictionary<string, ResolvedSection>(StringComparer.Ordinal);
         var lengthOverrides = new Dictionary<string, MemberLengthOverride>(StringComparer.Ordinal);
         var connectors = new Dictionary<string, ConnectorLayout>(StringComparer.Ordinal);
         foreach (var m in truss.Members.OrderBy(m => m.Mark, StringComparer.Ordinal))
         {
-            var groupName = groupNames.GetValueOrDefault(m.GroupId, "?");
-            members.Add(new Member(m.Mark, nodeLabel.GetValueOrDefault(m.StartNodeId, "?"), nodeLabel.GetValueOrDefault(m.EndNodeId, "?"), groupName));
             var group = truss.Groups.FirstOrDefault(g => g.Id == m.GroupId);
             if (!string.IsNullOrWhiteSpace(m.SectionDesignationOverride))
             {
