@@ -56,8 +56,10 @@ public abstract partial class ServiceBehaviourTests
         var (_, truss) = await ProjectWithTrussAsync();
         var designer = As(Designer);
 
-        var proposal = Ok(await designer.Design.ProposeSizingAsync(truss.Id, new Progress<SizingProgress>()));
+        var progress = new RecordingProgress();
+        var proposal = Ok(await designer.Design.ProposeSizingAsync(truss.Id, progress));
         Assert.NotEmpty(proposal.Rounds);
+        Assert.Contains(progress.Reports, r => r.Round == 1 && r.Message.Contains("TopChord", StringComparison.Ordinal));
         Assert.True(proposal.MassAfterKg > 0);
         Assert.Empty(proposal.Unsized);
         var accepted = Ok(await designer.Design.AcceptSizingAsync(proposal));
@@ -245,5 +247,19 @@ public abstract partial class ServiceBehaviourTests
         Assert.Matches("^[0-9a-f]{64}$", change.Fingerprint!);
         Assert.True(await db.AuditEntries.CountAsync(e => e.Action == "Designed" && e.EntityId == truss.Id.ToString()) >= 1);
         Assert.True(await db.AuditEntries.AnyAsync(e => e.EntityType == "Project" && e.Action == "Created"));
+    }
+
+    /// <summary>Keeps every report, synchronously (no timing involved).</summary>
+    private sealed class RecordingProgress : IProgress<SizingProgress>
+    {
+        public List<SizingProgress> Reports { get; } = [];
+
+        public void Report(SizingProgress value)
+        {
+            lock (Reports)
+            {
+                Reports.Add(value);
+            }
+        }
     }
 }
