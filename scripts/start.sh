@@ -9,7 +9,7 @@ urls="${TRUSSWEB_URLS:-http://127.0.0.1:5080}"
 database=()
 if [ -z "${TrussWeb__Database__ConnectionString:-}" ] && [ -z "${TrussWeb__Database__Provider:-}" ]; then
   mkdir -p data
-  database=(--TrussWeb:Database:ConnectionString "Data Source=$PWD/data/trussweb.db")
+  database=("--TrussWeb:Database:ConnectionString=Data Source=$PWD/data/trussweb.db")
 fi
 dotnet build src/TrussWeb.Web -c Release -nologo -v quiet
 exec dotnet run --no-build --project src/TrussWeb.Web -c Release -- --urls "$urls" --demo "${database[@]}" "$@"

@@ -9,7 +9,9 @@ using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Hosting;
 using TrussWeb.Web.Components;
 
-var builder = WebApplication.CreateBuilder(args);
+// "--demo" is a switch without a value: keep it away from the command-line configuration provider,
+// which would otherwise take the next argument as its value.
+var builder = WebApplication.CreateBuilder(args.Where(a => a != "--demo").ToArray());
 if (AdminCommands.IsVerb(args))
 {
     builder.Logging.SetMinimumLevel(LogLevel.Warning);
