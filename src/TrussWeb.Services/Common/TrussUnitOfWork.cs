@@ -1,0 +1,97 @@
+using Microsoft.EntityFrameworkCore;
+using TrussWeb.Core.Validation;
+using TrussWeb.Data;
+using TrussWeb.Data.Entities;
+using TrussWeb.Services.Authorization;
+using TrussWeb.Services.Contracts;
+using TrussWeb.Services.Design;
+using TrussWeb.Services.Trusses;
+
+namespace TrussWeb.Services.Common;
+
+/// <summary>
+/// The shared steps of every truss use case: load the truss with everything it owns, authorize, and
+/// commit (re-design, replace snapshots, write the audit, save in one transaction, turn a lost race
+/// into a Conflict result).
+/// </summary>
+internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> factory, Authorizer authorizer, TimeProvider clock)
+{
+    public Authorizer Authorizer { get; } = authorizer;
+
+    public ICallerContext Caller => Authorizer.Caller;
+
+    public TimeProvider Clock { get; } = clock;
+
+    public Task<TrussWebDbContext> CreateAsync(CancellationToken cancellationToken) => factory.CreateDbContextAsync(cancellationToken);
+
+    /// <summary>Loads and authorizes; Truss is null when Refusal is set.</summary>
+    public async Task<(Truss? Truss, ServiceResult<T>? Refusal, string? Role)> LoadAsync<T>(TrussWebDbContext db, Guid trussId, string operation, CancellationToken cancellationToken)
+    {
+        var projectId = await db.Trusses.Where(t => t.Id == trussId).Select(t => (Guid?)t.ProjectId).FirstOrDefaultAsync(cancellationToken).ConfigureAwait(false);
+        if (projectId is null)
+        {
+            return (null, ServiceResult<T>.NotFound("The truss does not exist or you are not a member of its project."), null);
+        }
+
+        var (refusal, role) = await Authorizer.CheckProjectAsync<T>(db, projectId.Value, operation, cancellationToken).ConfigureAwait(false);
+        if (refusal is not null)
+        {
+            return (null, refusal, role);
+        }
+
+        var truss = await DesignInputBuilder.LoadTrussAsync(db, trussId, cancellationToken).ConfigureAwait(false);
+        return truss is null ? (null, ServiceResult<T>.NotFound("The truss was deleted."), role) : (truss, null, role);
+    }
+
+    /// <summary>
+    /// Re-designs the truss from its tracked (edited) state, stages new snapshots, audits every change
+    /// and saves. Returns the design issues (the inputs are saved even when the design cannot run) or a conflict.
+    /// </summary>
+    public async Task<(ServiceResult<T>? Failure, IReadOnlyList<ValidationIssue> DesignIssues, DesignRunner.Outcome? Outcome)> CommitAsync<T>(
+        TrussWebDbContext db, Truss truss, string? auditAction, CancellationToken cancellationToken)
+    {
+        var (outcome, issues) = await DesignRunner.DesignAndStageAsync(db, truss, cancellationToken).ConfigureAwait(false);
+        AuditWriter.AddChanges(db, Caller, Clock, truss.ProjectId, outcome?.TrussSnapshot.Fingerprint);
+        if (auditAction is not null || outcome is not null)
+        {
+            AuditWriter.AddAction(db, Caller, Clock, truss.ProjectId, nameof(Truss), truss.Id.ToString(), auditAction ?? "Designed",
+                newValue: outcome?.TrussSnapshot.Status ?? "NotDesigned", fingerprint: outcome?.TrussSnapshot.Fingerprint);
+        }
+
+        try
+        {
+            await db.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
+        }
+        catch (DbUpdateConcurrencyException ex)
+        {
+            return (ServiceResult<T>.Conflict(await Conflicts.DescribeAsync(db, ex, cancellationToken).ConfigureAwait(false)), issues, null);
+        }
+
+        return (null, issues, outcome);
+    }
+
+    /// <summary>Reads the truss detail fresh from a new context.</summary>
+    public async Task<ServiceResult<TrussDetail>> DetailAsync(Guid trussId, string? role, IReadOnlyList<ValidationIssue>? designIssues, CancellationToken cancellationToken)
+    {
+        await using var db = await CreateAsync(cancellationToken).ConfigureAwait(false);
+        var truss = await DesignInputBuilder.LoadTrussAsync(db, trussId, cancellationToken).ConfigureAwait(false);
+        if (truss is null)
+        {
+            return ServiceResult<TrussDetail>.NotFound("The truss was deleted.");
+        }
+
+        var snapshots = await db.DesignSnapshots.AsNoTracking().Where(s => s.TrussId == trussId).ToListAsync(cancellationToken).ConfigureAwait(false);
+        IReadOnlyList<ValidationIssue> messages = designIssues ?? [];
+        if (designIssues is null && snapshots.All(s => s.MemberId is not null))
+        {
+            messages = (await DesignInputBuilder.BuildAsync(db, truss, forSizing: false, cancellationToken).ConfigureAwait(false)).Issues;
+        }
+
+        var canEdit = PermissionTable.Allows(AccessLevel.ProjectEdit, Caller.Roles, role);
+        return ServiceResult<TrussDetail>.Ok(TrussViews.ToDetail(truss, snapshots, role, canEdit, messages.Select(m => m.ToString()).ToList()));
+    }
+
+    /// <summary>Sets the version EF compares on save to the one the caller loaded.</summary>
+    public static void ExpectVersion(TrussWebDbContext db, TrackedEntity row, long loadedVersion) =>
+        db.Entry(row).Property(r => r.Version).OriginalValue = loadedVersion;
+}

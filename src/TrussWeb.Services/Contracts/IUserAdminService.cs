@@ -1,0 +1,21 @@
+namespace TrussWeb.Services.Contracts;
+
+/// <summary>User administration (administrators only).</summary>
+public interface IUserAdminService
+{
+    Task<ServiceResult<IReadOnlyList<UserView>>> ListUsersAsync(CancellationToken cancellationToken = default);
+
+    Task<ServiceResult<UserView>> CreateUserAsync(CreateUserInput input, CancellationToken cancellationToken = default);
+
+    Task<ServiceResult<UserView>> SetRolesAsync(string userId, IReadOnlyList<string> roles, CancellationToken cancellationToken = default);
+
+    Task<ServiceResult<UserView>> ResetPasswordAsync(string userId, string newPassword, CancellationToken cancellationToken = default);
+
+    /// <summary>Locks (until unlocked) or unlocks the user.</summary>
+    Task<ServiceResult<UserView>> SetLockedAsync(string userId, bool locked, CancellationToken cancellationToken = default);
+}
+
+public sealed record UserView(string Id, string Email, string DisplayName, IReadOnlyList<string> Roles, bool IsLockedOut, DateTimeOffset? LockoutEndUtc);
+
+/// <summary>A new user; Roles are <c>TrussWeb.Data.Roles</c> names.</summary>
+public sealed record CreateUserInput(string Email, string DisplayName, string Password, IReadOnlyList<string> Roles);

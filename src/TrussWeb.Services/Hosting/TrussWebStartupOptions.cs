@@ -1,0 +1,42 @@
+namespace TrussWeb.Services.Hosting;
+
+/// <summary>What <see cref="TrussWebStartup.InitialiseAsync"/> does and where it writes.</summary>
+public sealed record TrussWebStartupOptions
+{
+    /// <summary>Configuration key that turns demo mode on (or pass <c>--demo</c>).</summary>
+    public const string DemoKey = "TrussWeb:Demo:Enabled";
+
+    /// <summary>Configuration key of the first administrator's password (else one is generated and printed once).</summary>
+    public const string AdminPasswordKey = "TrussWeb:Admin:Password";
+
+    /// <summary>Configuration key of the first administrator's e-mail.</summary>
+    public const string AdminEmailKey = "TrussWeb:Admin:Email";
+
+    public const string DefaultAdminEmail = "admin@trussweb.local";
+
+    public bool Demo { get; init; }
+
+    /// <summary>Seed-data folder; null: located with <see cref="SeedData.Locate"/>.</summary>
+    public string? SeedDataPath { get; init; }
+
+    public string AdminEmail { get; init; } = DefaultAdminEmail;
+
+    public string? AdminPassword { get; init; }
+
+    /// <summary>Where sign-in details are printed (the console).</summary>
+    public TextWriter Output { get; init; } = Console.Out;
+
+    /// <summary>Reads the options from configuration and the command line.</summary>
+    public static TrussWebStartupOptions From(Microsoft.Extensions.Configuration.IConfiguration configuration, string[] args, string contentRoot)
+    {
+        ArgumentNullException.ThrowIfNull(configuration);
+        ArgumentNullException.ThrowIfNull(args);
+        return new TrussWebStartupOptions
+        {
+            Demo = args.Contains("--demo", StringComparer.Ordinal) || string.Equals(configuration[DemoKey], "true", StringComparison.OrdinalIgnoreCase),
+            SeedDataPath = SeedData.Locate(configuration[SeedData.PathKey], contentRoot),
+            AdminEmail = string.IsNullOrWhiteSpace(configuration[AdminEmailKey]) ? DefaultAdminEmail : configuration[AdminEmailKey]!,
+            AdminPassword = string.IsNullOrWhiteSpace(configuration[AdminPasswordKey]) ? null : configuration[AdminPasswordKey],
+        };
+    }
+}
