@@ -24,7 +24,9 @@ done
 echo "== smoke: the app starts and answers on loopback"
 port=$(shuf -i 20000-59999 -n 1)
 log=$(mktemp)
-dotnet src/TrussWeb.Web/bin/Release/net10.0/TrussWeb.Web.dll --urls "http://127.0.0.1:$port" >"$log" 2>&1 &
+smokedir=$(mktemp -d)
+TrussWeb__Database__ConnectionString="Data Source=$smokedir/smoke.db" \
+  dotnet src/TrussWeb.Web/bin/Release/net10.0/TrussWeb.Web.dll --urls "http://127.0.0.1:$port" >"$log" 2>&1 &
 app=$!
 trap 'kill $app 2>/dev/null || true' EXIT
 ok=""
@@ -33,7 +35,9 @@ for _ in $(seq 1 60); do
   sleep 1
 done
 if [ -z "$ok" ]; then echo "the app did not answer on port $port"; cat "$log"; exit 1; fi
-curl -fsS "http://127.0.0.1:$port/" | grep -q "competent engineer" || { echo "home page lacks the caution text"; exit 1; }
+home=$(curl -fsSL "http://127.0.0.1:$port/")
+grep -q "competent engineer" <<<"$home" || { echo "home page lacks the caution text"; cat "$log"; exit 1; }
+curl -fsS "http://127.0.0.1:$port/health/ready" -o /dev/null || { echo "/health/ready did not answer 200"; cat "$log"; exit 1; }
 kill $app; wait $app 2>/dev/null || true
 echo "smoke passed"
 
