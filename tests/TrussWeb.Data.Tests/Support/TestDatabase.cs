@@ -1,29 +1,20 @@
-using Microsoft.Extensions.Configuration;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Time.Testing;
 
+using TrussWeb.Testing;
+
 namespace TrussWeb.Data.Tests.Support;
 
-/// <summary>One empty database of one provider, private to a test, removed on dispose.</summary>
-public abstract class TestDatabase : IAsyncDisposable
+/// <summary>Service providers over a test database, built the way the app builds them.</summary>
+public static class TestDatabaseServices
 {
-    public abstract DatabaseProvider Provider { get; }
-
-    public abstract string ConnectionString { get; }
-
     /// <summary>
     /// A fresh service provider over this database, built the way the app builds it
     /// (<see cref="DependencyInjection.AddTrussWebData"/> from configuration), with the given clock and user.
     /// </summary>
-    public ServiceProvider BuildServices(FakeTimeProvider clock, TestUser user, Action<IServiceCollection>? configure = null)
+    public static ServiceProvider BuildServices(this TestDatabase database, FakeTimeProvider clock, TestUser user, Action<IServiceCollection>? configure = null)
     {
-        var configuration = new ConfigurationBuilder()
-            .AddInMemoryCollection(new Dictionary<string, string?>
-            {
-                [DatabaseSettings.ProviderKey] = Provider.ToString(),
-                [DatabaseSettings.ConnectionStringKey] = ConnectionString,
-            })
-            .Build();
+        var configuration = database.Configuration();
         var services = new ServiceCollection();
         services.AddSingleton<TimeProvider>(clock);
         services.AddSingleton<ICurrentUser>(user);
@@ -31,6 +22,4 @@ public abstract class TestDatabase : IAsyncDisposable
         configure?.Invoke(services);
         return services.BuildServiceProvider(new ServiceProviderOptions { ValidateScopes = true, ValidateOnBuild = true });
     }
-
-    public abstract ValueTask DisposeAsync();
 }

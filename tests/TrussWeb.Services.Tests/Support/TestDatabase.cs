@@ -1,32 +1,22 @@
-using Microsoft.Extensions.Configuration;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Time.Testing;
 using TrussWeb.Data;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Hosting;
+using TrussWeb.Testing;
 
 namespace TrussWeb.Services.Tests.Support;
 
-/// <summary>One empty database of one provider, private to a test, removed on dispose.</summary>
-public abstract class TestDatabase : IAsyncDisposable
+/// <summary>Service providers over a test database, built the way the app builds them.</summary>
+public static class TestDatabaseServices
 {
-    public abstract DatabaseProvider Provider { get; }
-
-    public abstract string ConnectionString { get; }
-
     /// <summary>
     /// A service provider built the way the app builds it (AddTrussWebData + AddTrussWebServices from
     /// configuration), whose caller (and audit-stamp user) is whatever <paramref name="callers"/> holds now.
     /// </summary>
-    public ServiceProvider BuildServices(FakeTimeProvider clock, CallerHolder callers)
+    public static ServiceProvider BuildServices(this TestDatabase database, FakeTimeProvider clock, CallerHolder callers)
     {
-        var configuration = new ConfigurationBuilder()
-            .AddInMemoryCollection(new Dictionary<string, string?>
-            {
-                [DatabaseSettings.ProviderKey] = Provider.ToString(),
-                [DatabaseSettings.ConnectionStringKey] = ConnectionString,
-            })
-            .Build();
+        var configuration = database.Configuration();
         var services = new ServiceCollection();
         services.AddLogging();
         services.AddSingleton<TimeProvider>(clock);
@@ -37,8 +27,6 @@ public abstract class TestDatabase : IAsyncDisposable
         services.AddTrussWebServices(configuration);
         return services.BuildServiceProvider(new ServiceProviderOptions { ValidateScopes = true });
     }
-
-    public abstract ValueTask DisposeAsync();
 }
 
 /// <summary>Who the next scope acts as.</summary>

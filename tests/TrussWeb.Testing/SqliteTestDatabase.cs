@@ -1,15 +1,15 @@
 using Microsoft.Data.Sqlite;
-
 using TrussWeb.Data;
+using Xunit;
 
-namespace TrussWeb.Services.Tests.Support;
+namespace TrussWeb.Testing;
 
 /// <summary>A SQLite database file in its own temporary folder.</summary>
 public sealed class SqliteTestDatabase : TestDatabase
 {
     public SqliteTestDatabase()
     {
-        Folder = Path.Combine(Path.GetTempPath(), "trussweb-services-tests", Guid.NewGuid().ToString("N"));
+        Folder = Path.Combine(Path.GetTempPath(), "trussweb-tests", Guid.NewGuid().ToString("N"));
         Directory.CreateDirectory(Folder);
         FilePath = Path.Combine(Folder, "trussweb.db");
         ConnectionString = new SqliteConnectionStringBuilder { DataSource = FilePath }.ToString();

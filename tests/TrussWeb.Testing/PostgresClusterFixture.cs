@@ -1,8 +1,7 @@
 using System.Diagnostics;
+using Xunit;
 
-using TrussWeb.Data;
-
-namespace TrussWeb.Services.Tests.Support;
+namespace TrussWeb.Testing;
 
 /// <summary>
 /// The PostgreSQL server for the Postgres tests: the one named by <c>TRUSSWEB_TEST_PG</c>, or else a

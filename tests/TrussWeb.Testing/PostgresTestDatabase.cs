@@ -1,8 +1,8 @@
 using Npgsql;
-
 using TrussWeb.Data;
+using Xunit;
 
-namespace TrussWeb.Services.Tests.Support;
+namespace TrussWeb.Testing;
 
 /// <summary>A fresh database on the test cluster, dropped on dispose.</summary>
 public sealed class PostgresTestDatabase : TestDatabase
