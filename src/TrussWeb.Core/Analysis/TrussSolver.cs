@@ -19,6 +19,12 @@ public static class TrussSolver
     /// <summary>Relative size below which a member force is round-off and is shown as zero (2026-12-01 choice: far above double precision noise, far below any design force).</summary>
     public const double RoundOffRelative = 1e-12;
 
+    /// <summary>Smallest member area the solver accepts, mm² (below it the stiffness matrix loses meaning).</summary>
+    public const double MinAreaMm2 = 1;
+
+    /// <summary>Largest member area the solver accepts, mm² (10 m²; any steel section is far smaller).</summary>
+    public const double MaxAreaMm2 = 1e7;
+
     /// <summary>As <see cref="Analyse"/>, but returns the issues instead of throwing when the input is invalid.</summary>
     public static bool TryAnalyse(TrussModel model, IReadOnlyList<LoadCase> cases, IReadOnlyList<LoadCombination> combinations, AnalysisOptions options,
         out AnalysisResult? result, out IReadOnlyList<ValidationIssue> issues)
@@ -55,9 +61,9 @@ public static class TrussSolver
         {
             var m = model.Members[e];
             var (ea, area) = options.Members.TryGetValue(m.Id, out var ms) ? (ms.ElasticModulus, ms.Area) : (options.DefaultElasticModulus, options.DefaultArea(m));
-            if (!(ea > 0) || !(area > 0) || !double.IsFinite(ea * area))
+            if (!(ea >= PlausibleRange.MinModulusMPa && ea <= PlausibleRange.MaxModulusMPa) || !(area >= MinAreaMm2 && area <= MaxAreaMm2))
             {
-                issues.Add(new ValidationIssue("Stiffness", $"member {m.Id} needs E > 0 MPa and A > 0 mm² (got E = {ea} MPa, A = {area} mm²)"));
+                issues.Add(new ValidationIssue("Stiffness", $"member {m.Id} needs E from {PlausibleRange.MinModulusMPa} to {PlausibleRange.MaxModulusMPa} MPa and A from {MinAreaMm2} to {MaxAreaMm2:G3} mm² (got E = {ea} MPa, A = {area} mm²)"));
             }
 
             stiffness[e] = ea * area;
@@ -86,6 +92,10 @@ public static class TrussSolver
                 else if (!double.IsFinite(l.Fx) || !double.IsFinite(l.Fy))
                 {
                     issues.Add(new ValidationIssue("LoadCases", $"load case {c.Id} has a load at node {l.Node} that is not a finite number"));
+                }
+                else if (Math.Abs(l.Fx) > PlausibleRange.MaxForceN || Math.Abs(l.Fy) > PlausibleRange.MaxForceN)
+                {
+                    issues.Add(new ValidationIssue("LoadCases", $"load case {c.Id} has a load at node {l.Node} above {PlausibleRange.MaxForceN:G3} N"));
                 }
             }
         }

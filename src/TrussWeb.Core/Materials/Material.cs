@@ -23,10 +23,10 @@ public sealed record Material(string Grade, double Fy, double Fu, double E, doub
     public IReadOnlyList<ValidationIssue> Validate()
     {
         var issues = new List<ValidationIssue>();
-        Guard.Positive(issues, nameof(Fy), Fy, "MPa");
-        Guard.Positive(issues, nameof(Fu), Fu, "MPa");
-        Guard.Positive(issues, nameof(E), E, "MPa");
-        Guard.Positive(issues, nameof(G), G, "MPa");
+        Guard.InRange(issues, nameof(Fy), Fy, PlausibleRange.MinStrengthMPa, PlausibleRange.MaxStrengthMPa, "MPa");
+        Guard.InRange(issues, nameof(Fu), Fu, PlausibleRange.MinStrengthMPa, PlausibleRange.MaxStrengthMPa, "MPa");
+        Guard.InRange(issues, nameof(E), E, PlausibleRange.MinModulusMPa, PlausibleRange.MaxModulusMPa, "MPa");
+        Guard.InRange(issues, nameof(G), G, PlausibleRange.MinModulusMPa, PlausibleRange.MaxModulusMPa, "MPa");
         if (Fy > 0 && Fu > 0 && Fu < Fy)
         {
             issues.Add(new ValidationIssue(nameof(Fu), $"fu = {Fu} MPa must not be less than fy = {Fy} MPa"));

@@ -43,7 +43,19 @@ public static class TrussGenerator
                 throw new OutOfScopeException($"no generator for truss type {parameters.Type}");
         }
 
-        return b.ToModel();
+        // Parameters can be valid one by one and still give a degenerate truss (a pitch so flat that
+        // the first vertical is shorter than the coincidence tolerance): say so, naming the parameters.
+        var model = b.ToModel();
+        var issues = TrussModelValidator.Validate(model);
+        if (issues.Count > 0)
+        {
+            throw new InputValidationException(issues
+                .Select(i => new ValidationIssue("Geometry", $"these parameters give an invalid truss (check span, pitch or apex height, heel depth and panels): {i.Message}"))
+                .Distinct()
+                .ToList());
+        }
+
+        return model;
     }
 
     private sealed class Builder(TrussParameters p)

@@ -83,6 +83,10 @@ public static class TrussModelValidator
             {
                 issues.Add(new ValidationIssue("Nodes", $"node {n.Id} has a coordinate that is not a finite number"));
             }
+            else if (Math.Abs(n.X) > PlausibleRange.MaxCoordinateMm || Math.Abs(n.Y) > PlausibleRange.MaxCoordinateMm)
+            {
+                issues.Add(new ValidationIssue("Nodes", $"node {n.Id} lies more than {PlausibleRange.MaxCoordinateMm:0} mm from the origin (x = {n.X:G6}, y = {n.Y:G6} mm)"));
+            }
 
             counts[n.Id] = counts.GetValueOrDefault(n.Id) + 1;
             nodes.TryAdd(n.Id, n);

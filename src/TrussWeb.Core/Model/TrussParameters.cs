@@ -14,6 +14,9 @@ public sealed record TrussParameters
     /// <summary>Largest roof pitch accepted, degrees (common practice: steeper roofs are not trusses of this kind).</summary>
     public const double MaxPitchDegrees = 75;
 
+    /// <summary>Largest panel count a generator accepts (10 000 nodes and more are beyond any roof truss).</summary>
+    public const int MaxPanels = 5_000;
+
     public required TrussType Type { get; init; }
 
     /// <summary>Span between the heel (support) nodes, mm.</summary>
@@ -65,9 +68,23 @@ public sealed record TrussParameters
     public IReadOnlyList<ValidationIssue> Validate()
     {
         var issues = new List<ValidationIssue>();
-        Guard.Positive(issues, nameof(Span), Span, "mm");
-        Guard.Positive(issues, nameof(TrussSpacing), TrussSpacing, "mm");
-        Guard.NonNegative(issues, nameof(HeelDepth), HeelDepth, "mm");
+        Guard.InRange(issues, nameof(Span), Span, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, "mm");
+        Guard.InRange(issues, nameof(TrussSpacing), TrussSpacing, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, "mm");
+        Guard.InRange(issues, nameof(HeelDepth), HeelDepth, 0, PlausibleRange.MaxLengthMm, "mm");
+        if (ApexHeight is { } apex)
+        {
+            Guard.InRange(issues, nameof(ApexHeight), apex, 0, PlausibleRange.MaxLengthMm, "mm");
+        }
+
+        if (HeelDepth > 0 && HeelDepth < TrussModelValidator.CoincidenceToleranceMm)
+        {
+            issues.Add(new ValidationIssue(nameof(HeelDepth), $"must be 0 (no heel) or at least {TrussModelValidator.CoincidenceToleranceMm} mm (got {HeelDepth.ToString("G6", CultureInfo.InvariantCulture)} mm)"));
+        }
+
+        if (PanelCount > MaxPanels)
+        {
+            issues.Add(new ValidationIssue(nameof(PanelCount), $"at most {MaxPanels} panels (got {PanelCount})"));
+        }
         var minPanels = Type == TrussType.Fink ? 4 : IsParallelChord || Type == TrussType.MonoPitch ? 1 : 2;
         if (PanelCount < minPanels)
         {

@@ -27,7 +27,7 @@ internal static class DimensionRules
             return false;
         }
 
-        return true;
+        return WithinLimits(issues, field, label, value);
     }
 
     /// <summary>Adds an issue unless the value is finite and not negative; returns whether it is.</summary>
@@ -42,6 +42,25 @@ internal static class DimensionRules
         if (value < 0)
         {
             issues.Add(new ValidationIssue(field, $"{label} = {Num(value)} mm must not be negative"));
+            return false;
+        }
+
+        // Radii may be as small as the user likes (a sharp corner); only the upper limit applies.
+        return value <= PlausibleRange.MaxDimensionMm || WithinLimits(issues, field, label, value);
+    }
+
+    /// <summary>Outer limits (<see cref="PlausibleRange"/>): no dimension below 0.1 mm or above 5 000 mm.</summary>
+    private static bool WithinLimits(List<ValidationIssue> issues, string field, string label, double value)
+    {
+        if (value < PlausibleRange.MinDimensionMm)
+        {
+            issues.Add(new ValidationIssue(field, $"{label} = {Num(value)} mm is below the smallest accepted dimension, {Num(PlausibleRange.MinDimensionMm)} mm"));
+            return false;
+        }
+
+        if (value > PlausibleRange.MaxDimensionMm)
+        {
+            issues.Add(new ValidationIssue(field, $"{label} = {Num(value)} mm is above the largest accepted dimension, {Num(PlausibleRange.MaxDimensionMm)} mm"));
             return false;
         }
 

@@ -29,6 +29,36 @@ public static class Guard
         }
     }
 
+    /// <summary>Adds an issue unless <paramref name="value"/> is finite and within [<paramref name="min"/>, <paramref name="max"/>].</summary>
+    public static bool InRange(List<ValidationIssue> issues, string field, double value, double min, double max, string unit)
+    {
+        var u = string.IsNullOrEmpty(unit) ? "" : " " + unit;
+        if (!double.IsFinite(value))
+        {
+            issues.Add(new ValidationIssue(field, $"must be a finite number (got {value.ToString(CultureInfo.InvariantCulture)})"));
+            return false;
+        }
+
+        var got = $"(got {value.ToString("G6", CultureInfo.InvariantCulture)}{u})";
+        if (value < min)
+        {
+            issues.Add(new ValidationIssue(field, min == 0
+                ? $"must not be negative {got}"
+                : min > 0 && value <= 0
+                    ? $"must be greater than 0{u} {got}"
+                    : $"must be at least {min.ToString(CultureInfo.InvariantCulture)}{u} {got}"));
+            return false;
+        }
+
+        if (value > max)
+        {
+            issues.Add(new ValidationIssue(field, $"must be at most {max.ToString(CultureInfo.InvariantCulture)}{u} {got}"));
+            return false;
+        }
+
+        return true;
+    }
+
     public static void ThrowIfAny(IReadOnlyList<ValidationIssue> issues)
     {
         if (issues.Count > 0)

@@ -34,20 +34,20 @@ public sealed class Sans10162Standard : IDesignStandard
         var s = member.Section;
         var l = member.Lengths;
         ValidateSection(issues, s);
-        Guard.Positive(issues, nameof(EffectiveLengths.Lx), l.Lx, "mm");
-        Guard.Positive(issues, nameof(EffectiveLengths.Ly), l.Ly, "mm");
-        Guard.Positive(issues, nameof(EffectiveLengths.Lz), l.Lz, "mm");
-        Guard.Positive(issues, nameof(EffectiveLengths.Kx), l.Kx, "");
-        Guard.Positive(issues, nameof(EffectiveLengths.Ky), l.Ky, "");
-        Guard.Positive(issues, nameof(EffectiveLengths.Kz), l.Kz, "");
+        Length(issues, nameof(EffectiveLengths.Lx), l.Lx);
+        Length(issues, nameof(EffectiveLengths.Ly), l.Ly);
+        Length(issues, nameof(EffectiveLengths.Lz), l.Lz);
+        Factor(issues, nameof(EffectiveLengths.Kx), l.Kx);
+        Factor(issues, nameof(EffectiveLengths.Ky), l.Ky);
+        Factor(issues, nameof(EffectiveLengths.Kz), l.Kz);
         if (l.KLu is { } klu)
         {
-            Guard.Positive(issues, nameof(EffectiveLengths.KLu), klu, "mm");
+            Length(issues, nameof(EffectiveLengths.KLu), klu);
         }
 
         if (l.KLv is { } klv)
         {
-            Guard.Positive(issues, nameof(EffectiveLengths.KLv), klv, "mm");
+            Length(issues, nameof(EffectiveLengths.KLv), klv);
         }
 
         issues.AddRange(member.Material.Validate());
@@ -60,6 +60,12 @@ public sealed class Sans10162Standard : IDesignStandard
         return issues;
     }
 
+    private static void Length(List<ValidationIssue> issues, string field, double value) =>
+        Guard.InRange(issues, field, value, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, "mm");
+
+    private static void Factor(List<ValidationIssue> issues, string field, double value) =>
+        Guard.InRange(issues, field, value, PlausibleRange.MinK, PlausibleRange.MaxK, "");
+
     /// <summary>True when <see cref="Validate"/> finds nothing (for forms).</summary>
     public bool IsValidMember(DesignMember member) => Validate(member).Count == 0;
 
@@ -69,8 +75,8 @@ public sealed class Sans10162Standard : IDesignStandard
         ArgumentNullException.ThrowIfNull(member);
         ArgumentNullException.ThrowIfNull(forces);
         var issues = new List<ValidationIssue>(Validate(member));
-        Guard.NonNegative(issues, nameof(MemberForces.Tension), forces.Tension, "N");
-        Guard.NonNegative(issues, nameof(MemberForces.Compression), forces.Compression, "N");
+        Guard.InRange(issues, nameof(MemberForces.Tension), forces.Tension, 0, PlausibleRange.MaxForceN, "N");
+        Guard.InRange(issues, nameof(MemberForces.Compression), forces.Compression, 0, PlausibleRange.MaxForceN, "N");
         Guard.ThrowIfAny(issues);
 
         var s = member.Section;
