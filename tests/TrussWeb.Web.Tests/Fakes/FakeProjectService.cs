@@ -17,8 +17,10 @@ public sealed class FakeProjectService : IProjectService
 
     public long? LastUpdateVersion { get; private set; }
 
+    public List<ProjectSummary> Summaries { get; } = [];
+
     public Task<ServiceResult<IReadOnlyList<ProjectSummary>>> ListMyProjectsAsync(CancellationToken cancellationToken = default) =>
-        Task.FromResult(ServiceResult<IReadOnlyList<ProjectSummary>>.Ok([]));
+        Task.FromResult(ServiceResult<IReadOnlyList<ProjectSummary>>.Ok(Summaries));
 
     public Task<ServiceResult<ProjectDetail>> GetAsync(Guid projectId, CancellationToken cancellationToken = default)
     {
