@@ -18,8 +18,10 @@ public sealed class FakeDesignService : IDesignService
     public Task<ServiceResult<TrussDesignView>> DesignTrussAsync(Guid trussId, CancellationToken cancellationToken = default) =>
         Task.FromResult(ServiceResult<TrussDesignView>.Forbidden("not set up"));
 
+    public TrussDesignView? StoredDesign { get; set; }
+
     public Task<ServiceResult<TrussDesignView>> GetTrussDesignAsync(Guid trussId, CancellationToken cancellationToken = default) =>
-        Task.FromResult(ServiceResult<TrussDesignView>.NotFound("not set up"));
+        Task.FromResult(StoredDesign is null ? ServiceResult<TrussDesignView>.NotFound("not set up") : ServiceResult<TrussDesignView>.Ok(StoredDesign));
 
     public Task<ServiceResult<MemberDesignDetail>> GetMemberDesignAsync(Guid trussId, Guid memberId, CancellationToken cancellationToken = default) =>
         Task.FromResult(ServiceResult<MemberDesignDetail>.NotFound("not set up"));

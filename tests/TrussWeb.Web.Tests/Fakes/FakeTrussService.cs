@@ -18,7 +18,10 @@ public sealed class FakeTrussService : ITrussService
 
     public Task<ServiceResult<TrussDetail>> CreateFromGeneratorAsync(Guid projectId, TrussGeneratorInput input, CancellationToken cancellationToken = default) => No();
 
-    public Task<ServiceResult<TrussDetail>> GetAsync(Guid trussId, CancellationToken cancellationToken = default) => No();
+    public TrussDetail? Truss { get; set; }
+
+    public Task<ServiceResult<TrussDetail>> GetAsync(Guid trussId, CancellationToken cancellationToken = default) =>
+        Task.FromResult(Truss is not null && Truss.Id == trussId ? ServiceResult<TrussDetail>.Ok(Truss) : ServiceResult<TrussDetail>.NotFound("No such truss."));
 
     public Task<ServiceResult<TrussDetail>> SaveSettingsAsync(Guid trussId, TrussSettingsInput input, CancellationToken cancellationToken = default) => No();
 
