@@ -58,6 +58,22 @@ public class TableEditorTests : TrussWebTestContext
     }
 
     [Fact]
+    public void Editing_a_cell_reports_unsaved_edits_and_undo_reports_them_gone()
+    {
+        var reports = new List<bool>();
+        var cut = Render<NodesEditor>(p => p.Add(x => x.Truss, TrussDetails.Small()).Add(x => x.CanEdit, true).Add(x => x.OnDirtyChanged, d => reports.Add(d)));
+
+        cut.FindAll("[data-testid=nodes-table] tbody tr")[0].QuerySelectorAll("input")[1].Change("10");
+        cut.WaitForAssertion(() => Assert.Equal([true], reports));
+        Assert.True(cut.Instance.IsDirty);
+
+        cut.FindAll("button").Single(b => b.TextContent.Contains("Undo edits", StringComparison.Ordinal)).Click();
+
+        cut.WaitForAssertion(() => Assert.Equal([true, false], reports));
+        Assert.False(cut.Instance.IsDirty);
+    }
+
+    [Fact]
     public void Read_only_truss_has_disabled_inputs_and_no_save_button()
     {
         var cut = Render<NodesEditor>(p => p.Add(x => x.Truss, TrussDetails.Small(canEdit: false)).Add(x => x.CanEdit, false));

@@ -14,6 +14,7 @@ namespace TrussWeb.Web.Components.Trusses;
 public abstract partial class TableEditorBase : ComponentBase
 {
     private TrussDetail? _loaded;
+    private bool _reportedDirty;
 
     [Parameter, EditorRequired] public required TrussDetail Truss { get; set; }
 
@@ -21,6 +22,9 @@ public abstract partial class TableEditorBase : ComponentBase
 
     /// <summary>Raised with the fresh detail after a successful save (the service has re-designed the truss).</summary>
     [Parameter] public EventCallback<TrussDetail> OnSaved { get; set; }
+
+    /// <summary>Raised when the working copy becomes dirty or clean (the page's navigation lock follows it).</summary>
+    [Parameter] public EventCallback<bool> OnDirtyChanged { get; set; }
 
     [Inject] protected ITrussService Trusses { get; set; } = default!;
 
@@ -44,6 +48,17 @@ public abstract partial class TableEditorBase : ComponentBase
         {
             _loaded = Truss;
             Load(Truss);
+        }
+    }
+
+    protected override async Task OnAfterRenderAsync(bool firstRender)
+    {
+        // Inputs re-render this editor on every change; tell the page when the dirty state flips.
+        var dirty = IsDirty;
+        if (dirty != _reportedDirty)
+        {
+            _reportedDirty = dirty;
+            await OnDirtyChanged.InvokeAsync(dirty);
         }
     }
 

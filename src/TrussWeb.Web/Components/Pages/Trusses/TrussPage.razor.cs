@@ -95,6 +95,9 @@ public partial class TrussPage
         _elevation = ElevationInput.From(_truss!, _design);
     }
 
+    // Re-render so NavigationLock's browser prompt follows the editors' state.
+    private void DirtyChanged(bool dirty) => StateHasChanged();
+
     private void OpenMember(string mark)
     {
         var member = _truss?.Members.FirstOrDefault(m => m.Mark == mark);
