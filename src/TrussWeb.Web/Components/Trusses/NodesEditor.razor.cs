@@ -43,8 +43,19 @@ public partial class NodesEditor
                 }
 
                 detail = result.Value!;
-                // Supports and restraints of the typed rows, against the fresh node versions.
-                _rows = typed;
+                // The node rows are stored: take them fresh (new versions) and keep the typed supports and restraints.
+                var byLabel = typed.Where(r => !r.Deleted).GroupBy(r => r.Label.Trim(), StringComparer.Ordinal).ToDictionary(g => g.Key, g => g.First(), StringComparer.Ordinal);
+                _rows = detail.Nodes.Select(NodeEdit.From).ToList();
+                foreach (var r in _rows)
+                {
+                    if (byLabel.TryGetValue(r.Label, out var t))
+                    {
+                        r.Support = t.Support;
+                        r.IsLaterallyRestrained = t.IsLaterallyRestrained;
+                    }
+                }
+
+                await AcceptPartAsync(detail);
             }
 
             var fresh = detail.Nodes.ToDictionary(n => n.Label, StringComparer.Ordinal);
@@ -61,6 +72,7 @@ public partial class NodesEditor
                 }
 
                 detail = result.Value!;
+                await AcceptPartAsync(detail);
                 fresh = detail.Nodes.ToDictionary(n => n.Label, StringComparer.Ordinal);
             }
 

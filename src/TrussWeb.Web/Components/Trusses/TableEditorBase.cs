@@ -62,6 +62,16 @@ public abstract partial class TableEditorBase : ComponentBase
         }
     }
 
+    /// <summary>
+    /// Takes a detail saved part-way through a multi-step save as the loaded state (fresh versions) and
+    /// tells the page, without replacing the working copy.
+    /// </summary>
+    protected async Task AcceptPartAsync(TrussDetail saved)
+    {
+        _loaded = saved;
+        await OnSaved.InvokeAsync(saved);
+    }
+
     /// <summary>Drops the edits and takes the stored table.</summary>
     protected void Revert()
     {
