@@ -34,6 +34,7 @@ public partial class CombinationsEditor
     {
         CombinationStandard.Sans10160 => "SANS 10160",
         CombinationStandard.Asce7Lrfd => "ASCE 7 (LRFD)",
+        CombinationStandard.En1990 => "EN 1990",
         _ => p.ToString(),
     };
 
