@@ -281,6 +281,14 @@ public abstract partial class ServiceBehaviourTests
         Assert.Equal(expected, Assert.Single(rollUp.Trusses).Counts);
         var projects = Ok(await As(Lead).Projects.ListMyProjectsAsync());
         Assert.Equal(2, Assert.Single(Assert.Single(projects).Trusses).ReviewStates["Approved"]);
+        var reviews = Ok(await As(Checker).Review.GetTrussReviewAsync(truss.Id));
+        Assert.Equal(truss.Members.Count, reviews.Count);
+        Assert.Equal(expected[MemberReviewState.AwaitingCheck], reviews.Count(r => r.State == MemberReviewState.AwaitingCheck));
+        Assert.All(reviews.Where(r => r.State == MemberReviewState.AwaitingCheck), r => Assert.Contains(ReviewAction.Approve, r.AvailableActions));
+        var returned = reviews.Single(r => r.MemberId == marks[2].Id);
+        Assert.Equal((MemberReviewState.Returned, "Chris Checker", "Dineo Designer", "Check the connector spacing"),
+            (returned.State, returned.CheckerName, returned.DesignerOfRecordName, returned.Comment));
+        Assert.DoesNotContain(ReviewAction.Approve, Ok(await As(Designer).Review.GetTrussReviewAsync(truss.Id)).Single(r => r.MemberId == marks[4].Id).AvailableActions);
     }
 
     [Fact]

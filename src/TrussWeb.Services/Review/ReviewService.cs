@@ -88,13 +88,7 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
         }
 
         Publish(published);
-        var views = new List<MemberReviewView>();
-        foreach (var m in submitted)
-        {
-            views.Add(await ViewAsync(db, m, role, cancellationToken).ConfigureAwait(false));
-        }
-
-        return ServiceResult<TrussSubmission>.Ok(new TrussSubmission(views, skipped));
+        return ServiceResult<TrussSubmission>.Ok(new TrussSubmission(await ViewsAsync(db, submitted, role, cancellationToken).ConfigureAwait(false), skipped));
     }
 
     public async Task<ServiceResult<MemberReviewView>> ResubmitAsync(Guid memberId, string answer, CancellationToken cancellationToken = default)
@@ -210,13 +204,7 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
 
         var members = await db.TrussMembers.AsNoTracking().Include(m => m.Truss).Where(m => m.TrussId == trussId).OrderBy(m => m.Mark)
             .ToListAsync(cancellationToken).ConfigureAwait(false);
-        var views = new List<MemberReviewView>();
-        foreach (var m in members)
-        {
-            views.Add(await ViewAsync(db, m, role, cancellationToken).ConfigureAwait(false));
-        }
-
-        return ServiceResult<IReadOnlyList<MemberReviewView>>.Ok(views);
+        return ServiceResult<IReadOnlyList<MemberReviewView>>.Ok(await ViewsAsync(db, members, role, cancellationToken).ConfigureAwait(false));
     }
 
     public async Task<ServiceResult<ChangesSinceApproval>> GetChangesSinceApprovalAsync(Guid memberId, CancellationToken cancellationToken = default)
@@ -528,17 +516,34 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
 
     private async Task<MemberReviewView> ViewAsync(TrussWebDbContext db, TrussMember member, string? role, CancellationToken cancellationToken)
     {
-        var state = ReviewStateMachine.Parse(member.ReviewState);
         var current = await db.DesignSnapshots.AsNoTracking().Where(s => s.MemberId == member.Id).Select(s => s.Fingerprint).FirstOrDefaultAsync(cancellationToken)
             .ConfigureAwait(false);
+        var names = await NamesAsync(db, [member.DesignerOfRecordId, member.CheckerId], cancellationToken).ConfigureAwait(false);
+        return View(member, role, current, names);
+    }
+
+    /// <summary>The views of many members with two queries (fingerprints, user names).</summary>
+    private async Task<IReadOnlyList<MemberReviewView>> ViewsAsync(TrussWebDbContext db, IReadOnlyList<TrussMember> members, string? role, CancellationToken cancellationToken)
+    {
+        var ids = members.Select(m => (Guid?)m.Id).ToList();
+        var fingerprints = await db.DesignSnapshots.AsNoTracking().Where(s => ids.Contains(s.MemberId)).Select(s => new { s.MemberId, s.Fingerprint })
+            .ToListAsync(cancellationToken).ConfigureAwait(false);
+        var byMember = fingerprints.ToDictionary(f => f.MemberId!.Value, f => f.Fingerprint);
+        var names = await NamesAsync(db, members.SelectMany(m => new[] { m.DesignerOfRecordId, m.CheckerId }), cancellationToken).ConfigureAwait(false);
+        return members.Select(m => View(m, role, byMember.GetValueOrDefault(m.Id), names)).ToList();
+    }
+
+    private MemberReviewView View(TrussMember member, string? role, string? currentFingerprint, IReadOnlyDictionary<string, string> names)
+    {
+        var state = ReviewStateMachine.Parse(member.ReviewState);
         var mayDecide = !string.Equals(member.DesignerOfRecordId, Caller.UserId, StringComparison.Ordinal)
                         && string.Equals(member.CheckerId, Caller.UserId, StringComparison.Ordinal);
         var actions = ReviewStateMachine.Available(state, ActorOf(role))
             .Where(a => a is not (ReviewAction.Approve or ReviewAction.Return) || mayDecide).ToList();
+        string? Name(string? id) => id is null ? null : names.GetValueOrDefault(id);
         return new MemberReviewView(member.Truss!.ProjectId, member.TrussId, member.Truss.Name, member.Id, member.Mark, state,
-            member.DesignerOfRecordId, await NameAsync(db, member.DesignerOfRecordId, cancellationToken).ConfigureAwait(false),
-            member.CheckerId, await NameAsync(db, member.CheckerId, cancellationToken).ConfigureAwait(false),
-            member.SubmittedUtc, member.ReviewedUtc, member.ReviewComment, member.ApprovedFingerprint, current, actions);
+            member.DesignerOfRecordId, Name(member.DesignerOfRecordId), member.CheckerId, Name(member.CheckerId),
+            member.SubmittedUtc, member.ReviewedUtc, member.ReviewComment, member.ApprovedFingerprint, currentFingerprint, actions);
     }
 
     private static async Task<IReadOnlyList<AuditEntryView>> AuditAsync(TrussWebDbContext db, Guid projectId, Guid? memberId, CancellationToken cancellationToken)
