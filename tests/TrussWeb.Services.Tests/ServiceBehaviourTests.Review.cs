@@ -292,6 +292,27 @@ public abstract partial class ServiceBehaviourTests
     }
 
     [Fact]
+    public async Task The_checker_queue_spans_the_projects_the_checker_belongs_to_and_leaves_a_project_when_they_leave_it()
+    {
+        var (first, truss, tc1) = await SubmittedTc1Async();
+        var lead = As(Lead);
+        var second = Ok(await lead.Projects.CreateAsync(new ProjectInput("Marula Workshop", "Invented client", "T-120", "Nowhere (invented)", "A", "SANS 10162-1", "S355JR")));
+        Ok(await lead.Projects.AddMemberAsync(second.Id, new AddProjectMemberInput(Designer.UserId!, TrussWeb.Data.Roles.Designer)));
+        var membership = Ok(await lead.Projects.AddMemberAsync(second.Id, new AddProjectMemberInput(Checker.UserId!, TrussWeb.Data.Roles.Checker)));
+        var other = Ok(await As(Designer).Trusses.CreateFromGeneratorAsync(second.Id,
+            new TrussGeneratorInput("WT1", TrussWeb.Core.Model.TrussType.PitchedHowe, 9000, 15, null, 0, 6, 4500, 2)));
+        Ok(await As(Designer).Review.SubmitAsync(other.Members.First().Id, Checker.UserId!, null));
+
+        var queue = Ok(await As(Checker).Review.ListMyQueueAsync());
+
+        Assert.Equal([(first.Id, tc1.Id), (second.Id, other.Members.First().Id)], queue.Select(q => (q.ProjectId, q.MemberId)).OrderBy(x => x.Item1 == second.Id));
+        Assert.Equal(["RT1", "WT1"], queue.Select(q => q.TrussName).Order(StringComparer.Ordinal));
+        Ok(await lead.Projects.RemoveMemberAsync(second.Id, new RowRef(membership.MembershipId, membership.Version)));
+        Assert.Equal([tc1.Id], Ok(await As(Checker).Review.ListMyQueueAsync()).Select(q => q.MemberId));
+        Assert.Equal(truss.Id, queue.Single(q => q.ProjectId == first.Id).TrussId);
+    }
+
+    [Fact]
     public async Task The_final_set_is_refused_with_the_count_until_every_member_is_approved_and_then_recorded()
     {
         var (project, truss) = await ProjectWithTrussAsync();
