@@ -102,7 +102,7 @@ public abstract partial class ServiceBehaviourTests : IAsyncLifetime
         scopes.Add(scope);
         var sp = scope.ServiceProvider;
         return new ServiceSet(sp.GetRequiredService<IProjectService>(), sp.GetRequiredService<ITrussService>(), sp.GetRequiredService<IDesignService>(),
-            sp.GetRequiredService<ICatalogueService>(), sp.GetRequiredService<IUserAdminService>());
+            sp.GetRequiredService<ICatalogueService>(), sp.GetRequiredService<IUserAdminService>(), sp.GetRequiredService<IReviewService>());
     }
 
     protected async Task<TrussWebDbContext> ContextAsync(ServiceProvider? provider = null)

@@ -21,6 +21,7 @@ public sealed class TrussMemberConfiguration : IEntityTypeConfiguration<TrussMem
         builder.Property(m => m.ReviewState).HasMaxLength(20).IsRequired();
         builder.Property(m => m.SubmittedBy).HasMaxLength(TrackedEntityConfiguration.UserIdLength);
         builder.Property(m => m.CheckerId).HasMaxLength(TrackedEntityConfiguration.UserIdLength);
+        builder.Property(m => m.DesignerOfRecordId).HasMaxLength(TrackedEntityConfiguration.UserIdLength);
         builder.Property(m => m.ApprovedFingerprint).HasMaxLength(DesignSnapshot.FingerprintLength).IsFixedLength();
         builder.HasOne(m => m.Truss).WithMany(t => t.Members).HasForeignKey(m => m.TrussId).OnDelete(DeleteBehavior.Cascade);
         builder.HasOne(m => m.StartNode).WithMany().HasForeignKey(m => m.StartNodeId).OnDelete(DeleteBehavior.NoAction);

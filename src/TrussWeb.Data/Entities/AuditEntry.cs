@@ -31,6 +31,9 @@ public class AuditEntry
 
     public string? NewValue { get; set; }
 
+    /// <summary>Free text given with the action, e.g. a checker's return comment or a designer's answer.</summary>
+    public string? Comment { get; set; }
+
     /// <summary>Fingerprint involved (e.g. of an approved snapshot), 64 hex characters.</summary>
     public string? Fingerprint { get; set; }
 }

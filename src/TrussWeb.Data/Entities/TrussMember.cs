@@ -64,7 +64,10 @@ public class TrussMember : TrackedEntity
     /// <summary>Further option flags as JSON text (owned by Services); null when none.</summary>
     public string? OptionsJson { get; set; }
 
-    /// <summary>Review state (e.g. Draft, Submitted, Approved, Returned); workflow owned by ReviewService.</summary>
+    /// <summary>
+    /// Review state, the name of a <c>MemberReviewState</c> of Services (NotSubmitted, AwaitingCheck, Approved,
+    /// Returned, ApprovalStale); "Draft" is the initial value and reads as NotSubmitted. Owned by ReviewService.
+    /// </summary>
     public string ReviewState { get; set; } = "Draft";
 
     public string? SubmittedBy { get; set; }
@@ -79,4 +82,16 @@ public class TrussMember : TrackedEntity
 
     /// <summary>Fingerprint of the snapshot that was approved; the approval is stale when it no longer matches.</summary>
     public string? ApprovedFingerprint { get; set; }
+
+    /// <summary>
+    /// Designer of record: the user who last submitted the member, or whose save last changed its
+    /// fingerprint. That user may not approve or return it (four eyes).
+    /// </summary>
+    public string? DesignerOfRecordId { get; set; }
+
+    /// <summary>Copy of the approved snapshot's <c>InputsJson</c>, kept so changes since approval never need a recalculation.</summary>
+    public string? ApprovedInputsJson { get; set; }
+
+    /// <summary>Copy of the approved snapshot's <c>ResultJson</c>.</summary>
+    public string? ApprovedResultJson { get; set; }
 }

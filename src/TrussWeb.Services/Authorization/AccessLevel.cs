@@ -15,6 +15,9 @@ public enum AccessLevel
     /// <summary>Project role Designer or ProjectLead, or an Administrator.</summary>
     ProjectEdit,
 
+    /// <summary>Project role Checker or ProjectLead, or an Administrator (review decisions).</summary>
+    ProjectCheck,
+
     /// <summary>Project role ProjectLead, or an Administrator.</summary>
     ProjectManage,
 

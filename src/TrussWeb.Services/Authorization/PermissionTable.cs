@@ -52,6 +52,23 @@ public static class PermissionTable
         [Key<IUserAdminService>(nameof(IUserAdminService.SetRolesAsync))] = AccessLevel.Administrator,
         [Key<IUserAdminService>(nameof(IUserAdminService.ResetPasswordAsync))] = AccessLevel.Administrator,
         [Key<IUserAdminService>(nameof(IUserAdminService.SetLockedAsync))] = AccessLevel.Administrator,
+
+        [Key<IReviewService>(nameof(IReviewService.SubmitAsync))] = AccessLevel.ProjectEdit,
+        [Key<IReviewService>(nameof(IReviewService.SubmitTrussAsync))] = AccessLevel.ProjectEdit,
+        [Key<IReviewService>(nameof(IReviewService.ResubmitAsync))] = AccessLevel.ProjectEdit,
+        [Key<IReviewService>(nameof(IReviewService.WithdrawAsync))] = AccessLevel.ProjectEdit,
+        [Key<IReviewService>(nameof(IReviewService.ApproveAsync))] = AccessLevel.ProjectCheck,
+        [Key<IReviewService>(nameof(IReviewService.ReturnAsync))] = AccessLevel.ProjectCheck,
+        [Key<IReviewService>(nameof(IReviewService.ReassignCheckerAsync))] = AccessLevel.ProjectManage,
+        [Key<IReviewService>(nameof(IReviewService.GetMemberReviewAsync))] = AccessLevel.ProjectRead,
+        [Key<IReviewService>(nameof(IReviewService.GetTrussReviewAsync))] = AccessLevel.ProjectRead,
+        [Key<IReviewService>(nameof(IReviewService.GetChangesSinceApprovalAsync))] = AccessLevel.ProjectRead,
+        [Key<IReviewService>(nameof(IReviewService.ListMyQueueAsync))] = AccessLevel.SignedIn,
+        [Key<IReviewService>(nameof(IReviewService.GetRollUpAsync))] = AccessLevel.ProjectRead,
+        [Key<IReviewService>(nameof(IReviewService.GetAuditAsync))] = AccessLevel.ProjectRead,
+        [Key<IReviewService>(nameof(IReviewService.ExportAuditCsvAsync))] = AccessLevel.ProjectRead,
+        [Key<IReviewService>(nameof(IReviewService.GetIssueStatusAsync))] = AccessLevel.ProjectRead,
+        [Key<IReviewService>(nameof(IReviewService.IssueFinalSetAsync))] = AccessLevel.ProjectManage,
     };
 
     public static string Key<TService>(string method) => $"{typeof(TService).Name}.{method}";
@@ -74,6 +91,7 @@ public static class PermissionTable
             AccessLevel.CreateProject => globalRoles.Contains(Roles.ProjectLead),
             AccessLevel.ProjectRead => projectRole is not null,
             AccessLevel.ProjectEdit => projectRole is Roles.Designer or Roles.ProjectLead,
+            AccessLevel.ProjectCheck => projectRole is Roles.Checker or Roles.ProjectLead,
             AccessLevel.ProjectManage => projectRole is Roles.ProjectLead,
             _ => false,
         };

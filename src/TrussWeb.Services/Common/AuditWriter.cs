@@ -13,6 +13,14 @@ internal static class AuditWriter
 {
     private static readonly HashSet<string> Bookkeeping = ["Version", "CreatedUtc", "CreatedBy", "UpdatedUtc", "UpdatedBy", "Id"];
 
+    /// <summary>Review columns of a member: ReviewService and <c>ReviewStaleness</c> write their own entries (state, comment, fingerprint).</summary>
+    private static readonly HashSet<string> ReviewColumns =
+    [
+        nameof(TrussMember.ReviewState), nameof(TrussMember.SubmittedBy), nameof(TrussMember.SubmittedUtc), nameof(TrussMember.CheckerId),
+        nameof(TrussMember.ReviewedUtc), nameof(TrussMember.ReviewComment), nameof(TrussMember.ApprovedFingerprint),
+        nameof(TrussMember.DesignerOfRecordId), nameof(TrussMember.ApprovedInputsJson), nameof(TrussMember.ApprovedResultJson),
+    ];
+
     /// <summary>One entry per changed field of every added, modified or deleted tracked row (audit rows and snapshots excluded).</summary>
     public static void AddChanges(TrussWebDbContext db, ICallerContext caller, TimeProvider clock, Guid? projectId, string? fingerprint = null)
     {
@@ -33,7 +41,8 @@ internal static class AuditWriter
                     db.AuditEntries.Add(New(caller, now, projectId, type, key, "Deleted", null, Describe(entry), null, fingerprint));
                     break;
                 default:
-                    foreach (var p in entry.Properties.Where(p => p.IsModified && !Bookkeeping.Contains(p.Metadata.Name)))
+                    foreach (var p in entry.Properties.Where(p => p.IsModified && !Bookkeeping.Contains(p.Metadata.Name)
+                                 && !(entry.Entity is TrussMember && ReviewColumns.Contains(p.Metadata.Name))))
                     {
                         var old = Conflicts.Text(p.OriginalValue);
                         var @new = Conflicts.Text(p.CurrentValue);
@@ -49,8 +58,12 @@ internal static class AuditWriter
     }
 
     public static void AddAction(TrussWebDbContext db, ICallerContext caller, TimeProvider clock, Guid? projectId, string entityType, string entityId,
-        string action, string? field = null, string? oldValue = null, string? newValue = null, string? fingerprint = null) =>
-        db.AuditEntries.Add(New(caller, clock.GetUtcNow().UtcDateTime, projectId, entityType, entityId, action, field, oldValue, newValue, fingerprint));
+        string action, string? field = null, string? oldValue = null, string? newValue = null, string? fingerprint = null, string? comment = null)
+    {
+        var entry = New(caller, clock.GetUtcNow().UtcDateTime, projectId, entityType, entityId, action, field, oldValue, newValue, fingerprint);
+        entry.Comment = Clip(comment);
+        db.AuditEntries.Add(entry);
+    }
 
     private static AuditEntry New(ICallerContext caller, DateTime now, Guid? projectId, string type, string key, string action, string? field,
         string? oldValue, string? newValue, string? fingerprint) => new()

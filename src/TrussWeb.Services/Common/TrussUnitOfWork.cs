@@ -14,7 +14,7 @@ namespace TrussWeb.Services.Common;
 /// commit (re-design, replace snapshots, write the audit, save in one transaction, turn a lost race
 /// into a Conflict result).
 /// </summary>
-internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> factory, Authorizer authorizer, TimeProvider clock)
+internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> factory, Authorizer authorizer, TimeProvider clock, IReviewEvents reviewEvents)
 {
     public Authorizer Authorizer { get; } = authorizer;
 
@@ -50,7 +50,7 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
     public async Task<(ServiceResult<T>? Failure, IReadOnlyList<ValidationIssue> DesignIssues, DesignRunner.Outcome? Outcome)> CommitAsync<T>(
         TrussWebDbContext db, Truss truss, string? auditAction, CancellationToken cancellationToken)
     {
-        var (outcome, issues) = await DesignRunner.DesignAndStageAsync(db, truss, cancellationToken).ConfigureAwait(false);
+        var (outcome, issues, events) = await DesignRunner.DesignAndStageAsync(db, truss, Caller, Clock, cancellationToken).ConfigureAwait(false);
         AuditWriter.AddChanges(db, Caller, Clock, truss.ProjectId, outcome?.TrussSnapshot.Fingerprint);
         if (auditAction is not null || outcome is not null)
         {
@@ -65,6 +65,11 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
         catch (DbUpdateConcurrencyException ex)
         {
             return (ServiceResult<T>.Conflict(await Conflicts.DescribeAsync(db, ex, cancellationToken).ConfigureAwait(false)), issues, null);
+        }
+
+        foreach (var e in events)
+        {
+            reviewEvents.Publish(e);
         }
 
         return (null, issues, outcome);

@@ -8,6 +8,7 @@ using TrussWeb.Data;
 using TrussWeb.Data.Entities;
 using TrussWeb.Services.Common;
 using TrussWeb.Services.Contracts;
+using TrussWeb.Services.Review;
 
 namespace TrussWeb.Services.Design;
 
@@ -19,38 +20,45 @@ internal static class DesignRunner
 {
     public sealed record Outcome(TrussDesignResult Result, IReadOnlyList<DesignSnapshot> Snapshots, DesignSnapshot TrussSnapshot);
 
-    /// <summary>Designs and replaces the truss's snapshots in <paramref name="db"/> (not saved yet). Issues when Core refuses the input.</summary>
-    public static async Task<(Outcome? Outcome, IReadOnlyList<ValidationIssue> Issues)> DesignAndStageAsync(
-        TrussWebDbContext db, Truss truss, CancellationToken cancellationToken)
+    /// <summary>
+    /// Designs and replaces the truss's snapshots in <paramref name="db"/> (not saved yet), then applies the
+    /// review consequences (designer of record, stale approvals; <see cref="ReviewStaleness"/>) in the same
+    /// unit of work. Issues when Core refuses the input; review events to publish after the commit.
+    /// </summary>
+    public static async Task<(Outcome? Outcome, IReadOnlyList<ValidationIssue> Issues, IReadOnlyList<ReviewEvent> ReviewEvents)> DesignAndStageAsync(
+        TrussWebDbContext db, Truss truss, ICallerContext caller, TimeProvider clock, CancellationToken cancellationToken)
     {
-        var (context, issues) = await DesignInputBuilder.BuildAsync(db, truss, forSizing: false, cancellationToken).ConfigureAwait(false);
-        if (context is null)
-        {
-            await RemoveSnapshotsAsync(db, truss.Id, cancellationToken).ConfigureAwait(false);
-            return (null, issues);
-        }
-
-        Outcome outcome;
-        try
-        {
-            outcome = Design(context);
-        }
-        catch (InputValidationException ex)
-        {
-            await RemoveSnapshotsAsync(db, truss.Id, cancellationToken).ConfigureAwait(false);
-            return (null, ex.Issues);
-        }
-
-        await RemoveSnapshotsAsync(db, truss.Id, cancellationToken).ConfigureAwait(false);
-        db.DesignSnapshots.AddRange(outcome.Snapshots);
-        db.DesignSnapshots.Add(outcome.TrussSnapshot);
-        return (outcome, []);
-    }
-
-    private static async Task RemoveSnapshotsAsync(TrussWebDbContext db, Guid trussId, CancellationToken cancellationToken)
-    {
-        var old = await db.DesignSnapshots.Where(s => s.TrussId == trussId).ToListAsync(cancellationToken).ConfigureAwait(false);
+        var old = await db.DesignSnapshots.Where(s => s.TrussId == truss.Id).ToListAsync(cancellationToken).ConfigureAwait(false);
+        var previous = old.Where(s => s.MemberId is not null).ToDictionary(s => s.MemberId!.Value, s => s.Fingerprint);
         db.DesignSnapshots.RemoveRange(old);
+
+        var (context, issues) = await DesignInputBuilder.BuildAsync(db, truss, forSizing: false, cancellationToken).ConfigureAwait(false);
+        Outcome? outcome = null;
+        if (context is not null)
+        {
+            try
+            {
+                outcome = Design(context);
+            }
+            catch (InputValidationException ex)
+            {
+                issues = ex.Issues;
+            }
+        }
+
+        var current = new Dictionary<Guid, string>();
+        if (outcome is not null)
+        {
+            db.DesignSnapshots.AddRange(outcome.Snapshots);
+            db.DesignSnapshots.Add(outcome.TrussSnapshot);
+            foreach (var s in outcome.Snapshots)
+            {
+                current[s.MemberId!.Value] = s.Fingerprint;
+            }
+        }
+
+        var events = ReviewStaleness.Apply(db, truss, previous, current, caller, clock);
+        return (outcome, outcome is null ? issues : [], events);
     }
 
     public static Outcome Design(DesignContext context)

@@ -1,3 +1,4 @@
+using TrussWeb.Services.Review;
 using TrussWeb.Data.Entities;
 using TrussWeb.Services.Common;
 using TrussWeb.Services.Contracts;
@@ -30,7 +31,7 @@ internal static class DesignViews
         var inputs = Json.Read<MemberInputsDoc>(s.InputsJson)!;
         var results = Json.Read<MemberResultDoc>(s.ResultJson)!;
         return new MemberDesignRow(member.Id, inputs.Mark, inputs.Group, inputs.Section.Designation, inputs.Material.Grade, inputs.LengthMm, inputs.Forces, inputs.Lengths,
-            results.Utilization, results.GoverningCheck, results.GoverningCombination, results.Status, member.ReviewState, s.Fingerprint);
+            results.Utilization, results.GoverningCheck, results.GoverningCombination, results.Status, ReviewStateMachine.Parse(member.ReviewState).ToString(), s.Fingerprint);
     }
 
     public static MemberDesignDetail Detail(DesignSnapshot s, TrussMember member)

@@ -12,6 +12,7 @@ using TrussWeb.Services.Common;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Design;
 using TrussWeb.Services.Projects;
+using TrussWeb.Services.Review;
 using TrussWeb.Services.Trusses;
 using TrussWeb.Services.Users;
 
@@ -47,6 +48,8 @@ public static class ServiceCollectionExtensions
         services.AddScoped<IDesignService, DesignService>();
         services.AddScoped<ICatalogueService, CatalogueService>();
         services.AddScoped<IUserAdminService, UserAdminService>();
+        services.AddScoped<IReviewService, ReviewService>();
+        services.TryAddSingleton<IReviewEvents, ReviewEvents>();
 
         services.AddDataProtection().SetApplicationName("TrussWeb").PersistKeysToDbContext<TrussWebDbContext>();
         services.AddIdentityCore<AppUser>(ConfigureIdentity)
@@ -71,22 +74,25 @@ public static class ServiceCollectionExtensions
         options.User.RequireUniqueEmail = true;
     }
 
-    /// <summary>The five services acting as <paramref name="caller"/> (start-up seeding, command line, tests), over a scope's data services.</summary>
+    /// <summary>The six services acting as <paramref name="caller"/> (start-up seeding, command line, tests), over a scope's data services.</summary>
     public static ServiceSet ServicesFor(IServiceProvider scope, ICallerContext caller)
     {
         ArgumentNullException.ThrowIfNull(scope);
         var factory = scope.GetRequiredService<IDbContextFactory<TrussWebDbContext>>();
         var clock = scope.GetRequiredService<TimeProvider>();
         var authorizer = new Authorizer(caller);
-        var work = new TrussUnitOfWork(factory, authorizer, clock);
+        var events = scope.GetService<IReviewEvents>() ?? new ReviewEvents();
+        var work = new TrussUnitOfWork(factory, authorizer, clock, events);
         return new ServiceSet(
-            new ProjectService(factory, authorizer, clock),
+            new ProjectService(factory, authorizer, clock, events),
             new TrussService(work),
             new DesignService(work),
             new CatalogueService(factory, authorizer, clock),
-            new UserAdminService(scope.GetRequiredService<UserManager<AppUser>>(), factory, authorizer, clock));
+            new UserAdminService(scope.GetRequiredService<UserManager<AppUser>>(), factory, authorizer, clock),
+            new ReviewService(factory, authorizer, clock, events));
     }
 }
 
 /// <summary>The service interfaces bound to one caller.</summary>
-public sealed record ServiceSet(IProjectService Projects, ITrussService Trusses, IDesignService Design, ICatalogueService Catalogue, IUserAdminService Users);
+public sealed record ServiceSet(IProjectService Projects, ITrussService Trusses, IDesignService Design, ICatalogueService Catalogue, IUserAdminService Users,
+    IReviewService Review);

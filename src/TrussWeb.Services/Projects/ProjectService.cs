@@ -5,11 +5,12 @@ using TrussWeb.Services.Authorization;
 using TrussWeb.Services.Common;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Design;
+using TrussWeb.Services.Review;
 
 namespace TrussWeb.Services.Projects;
 
 /// <summary>Project list with status roll-ups, settings and membership.</summary>
-internal sealed class ProjectService(IDbContextFactory<TrussWebDbContext> factory, Authorizer authorizer, TimeProvider clock) : IProjectService
+internal sealed class ProjectService(IDbContextFactory<TrussWebDbContext> factory, Authorizer authorizer, TimeProvider clock, IReviewEvents reviewEvents) : IProjectService
 {
     private static string Op(string method) => PermissionTable.Key<IProjectService>(method);
 
@@ -112,10 +113,14 @@ internal sealed class ProjectService(IDbContextFactory<TrussWebDbContext> factor
                 continue;
             }
 
-            var (outcome, _) = await DesignRunner.DesignAndStageAsync(tdb, truss, cancellationToken).ConfigureAwait(false);
+            var (outcome, _, events) = await DesignRunner.DesignAndStageAsync(tdb, truss, Caller, clock, cancellationToken).ConfigureAwait(false);
             AuditWriter.AddAction(tdb, Caller, clock, projectId, nameof(Truss), id.ToString(), "Designed", newValue: outcome?.TrussSnapshot.Status ?? "NotDesigned",
                 fingerprint: outcome?.TrussSnapshot.Fingerprint);
             await tdb.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
+            foreach (var e in events)
+            {
+                reviewEvents.Publish(e);
+            }
         }
 
         return await DetailAsync(db, projectId, role, cancellationToken).ConfigureAwait(false);
@@ -297,7 +302,7 @@ internal sealed class ProjectService(IDbContextFactory<TrussWebDbContext> factor
                 states.Count(s => s == "Fail"),
                 states.Count(s => s is null),
                 states.Count(s => s == "OutOfScope"),
-                mine.GroupBy(m => m.ReviewState, StringComparer.Ordinal).OrderBy(g => g.Key, StringComparer.Ordinal).ToDictionary(g => g.Key, g => g.Count(), StringComparer.Ordinal));
+                mine.GroupBy(m => ReviewStateMachine.Parse(m.ReviewState).ToString(), StringComparer.Ordinal).OrderBy(g => g.Key, StringComparer.Ordinal).ToDictionary(g => g.Key, g => g.Count(), StringComparer.Ordinal));
         }).ToList();
     }
 }

@@ -1,3 +1,4 @@
+using TrussWeb.Services.Review;
 using TrussWeb.Core.Loads;
 using TrussWeb.Data.Entities;
 using TrussWeb.Services.Common;
@@ -26,7 +27,7 @@ internal static class TrussViews
             var length = s is null || e is null ? 0 : Math.Sqrt(Math.Pow(e.XMm - s.XMm, 2) + Math.Pow(e.YMm - s.YMm, 2));
             byMember.TryGetValue(m.Id, out var snap);
             return new MemberView(m.Id, m.Version, m.Mark, m.StartNodeId, s?.Label ?? "?", m.EndNodeId, e?.Label ?? "?", m.GroupId, g?.Name ?? "?",
-                g?.SectionDesignation, m.SectionDesignationOverride, length, Overrides(m), m.ReviewState, snap?.Status, snap?.Utilization, snap?.Fingerprint);
+                g?.SectionDesignation, m.SectionDesignationOverride, length, Overrides(m), ReviewStateMachine.Parse(m.ReviewState).ToString(), snap?.Status, snap?.Utilization, snap?.Fingerprint);
         }).ToList();
 
         TrussDesignStatus design;

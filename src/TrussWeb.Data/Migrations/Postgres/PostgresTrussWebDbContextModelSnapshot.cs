@@ -285,6 +285,9 @@ namespace TrussWeb.Data.Migrations.Postgres
                         .HasMaxLength(50)
                         .HasColumnType("character varying(50)");
 
+                    b.Property<string>("Comment")
+                        .HasColumnType("text");
+
                     b.Property<string>("EntityId")
                         .IsRequired()
                         .HasMaxLength(100)
@@ -942,6 +945,12 @@ namespace TrussWeb.Data.Migrations.Postgres
                         .HasColumnType("character(64)")
                         .IsFixedLength();
 
+                    b.Property<string>("ApprovedInputsJson")
+                        .HasColumnType("text");
+
+                    b.Property<string>("ApprovedResultJson")
+                        .HasColumnType("text");
+
                     b.Property<string>("CheckerId")
                         .HasMaxLength(450)
                         .HasColumnType("character varying(450)");
@@ -961,6 +970,10 @@ namespace TrussWeb.Data.Migrations.Postgres
 
                     b.Property<DateTime>("CreatedUtc")
                         .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("DesignerOfRecordId")
+                        .HasMaxLength(450)
+                        .HasColumnType("character varying(450)");
 
                     b.Property<Guid>("EndNodeId")
                         .HasColumnType("uuid");

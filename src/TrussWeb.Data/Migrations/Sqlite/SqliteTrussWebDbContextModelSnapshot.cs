@@ -272,6 +272,9 @@ namespace TrussWeb.Data.Migrations.Sqlite
                         .HasMaxLength(50)
                         .HasColumnType("TEXT");
 
+                    b.Property<string>("Comment")
+                        .HasColumnType("TEXT");
+
                     b.Property<string>("EntityId")
                         .IsRequired()
                         .HasMaxLength(100)
@@ -929,6 +932,12 @@ namespace TrussWeb.Data.Migrations.Sqlite
                         .HasColumnType("TEXT")
                         .IsFixedLength();
 
+                    b.Property<string>("ApprovedInputsJson")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("ApprovedResultJson")
+                        .HasColumnType("TEXT");
+
                     b.Property<string>("CheckerId")
                         .HasMaxLength(450)
                         .HasColumnType("TEXT");
@@ -947,6 +956,10 @@ namespace TrussWeb.Data.Migrations.Sqlite
                         .HasColumnType("TEXT");
 
                     b.Property<DateTime>("CreatedUtc")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("DesignerOfRecordId")
+                        .HasMaxLength(450)
                         .HasColumnType("TEXT");
 
                     b.Property<Guid>("EndNodeId")
