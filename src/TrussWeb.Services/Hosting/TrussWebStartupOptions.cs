@@ -45,7 +45,11 @@ public sealed record TrussWebStartupOptions
         {
             MigrateOnStart = !string.Equals(configuration[MigrateOnStartKey]?.Trim(), "false", StringComparison.OrdinalIgnoreCase),
             Demo = args.Contains("--demo", StringComparer.Ordinal) || string.Equals(configuration[DemoKey], "true", StringComparison.OrdinalIgnoreCase),
-            SeedDataPath = SeedData.Locate(configuration[SeedData.PathKey], contentRoot),
+            SeedDataPath = SeedData.Locate(
+                string.IsNullOrWhiteSpace(configuration[SeedData.PathKey]) && Path.IsPathRooted(configuration[SeedData.FolderKey])
+                    ? configuration[SeedData.FolderKey]
+                    : configuration[SeedData.PathKey],
+                contentRoot),
             AdminEmail = string.IsNullOrWhiteSpace(configuration[AdminEmailKey]) ? DefaultAdminEmail : configuration[AdminEmailKey]!,
             AdminPassword = string.IsNullOrWhiteSpace(configuration[AdminPasswordKey]) ? null : configuration[AdminPasswordKey],
         };

@@ -27,7 +27,7 @@ public static class TelemetryExtensions
             return false;
         }
 
-        if (!Uri.TryCreate(endpointText.Trim(), UriKind.Absolute, out var endpoint))
+        if (!Uri.TryCreate(endpointText.Trim(), UriKind.Absolute, out var endpoint) || endpoint.Scheme is not ("http" or "https"))
         {
             throw new InvalidOperationException($"Configuration '{OtlpEndpointKey}' is '{endpointText}'; expected an absolute URL such as http://collector:4317.");
         }
