@@ -81,7 +81,8 @@ public sealed partial class DeploymentFilesTests
         var user = runtime.Last(l => l.StartsWith("USER ", StringComparison.Ordinal));
         Assert.NotEqual("root", user[5..].Trim());
         Assert.NotEqual("0", user[5..].Trim());
-        Assert.Contains(runtime, l => l.StartsWith("RUN ", StringComparison.Ordinal) && l.Contains("fonts-dejavu-core", StringComparison.Ordinal));
+        Assert.Contains(runtime, l => l.StartsWith("RUN ", StringComparison.Ordinal) && l.Contains("fonts-dejavu-core", StringComparison.Ordinal)
+            && l.Contains("fonts-dejavu-extra", StringComparison.Ordinal));
         Assert.Contains(runtime, l => l.StartsWith("HEALTHCHECK ", StringComparison.Ordinal) && l.Contains("/health/live", StringComparison.Ordinal));
         Assert.Contains(runtime, l => l.StartsWith("VOLUME ", StringComparison.Ordinal) && l.Contains("/data", StringComparison.Ordinal));
         var env = string.Join('\n', runtime.Where(l => l.StartsWith("ENV ", StringComparison.Ordinal)));
