@@ -9,6 +9,7 @@ using TrussWeb.Data.Entities;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Hosting;
 using TrussWeb.Web.Components;
+using TrussWeb.Web.Hosting;
 using TrussWeb.Web.Security;
 
 // "--demo" is a switch without a value: keep it away from the command-line configuration provider,
@@ -42,6 +43,7 @@ builder.Services.ConfigureApplicationCookie(options =>
 });
 builder.Services.AddAuthorization();
 builder.Services.AddCascadingAuthenticationState();
+builder.AddTrussWebDeployment();
 
 var app = builder.Build();
 
@@ -53,6 +55,7 @@ if (AdminCommands.IsVerb(args))
 
 await TrussWebStartup.InitialiseAsync(app.Services, TrussWebStartupOptions.From(builder.Configuration, args, builder.Environment.ContentRootPath));
 
+app.UseTrussWebDeployment();
 if (!app.Environment.IsDevelopment())
 {
     app.UseExceptionHandler("/Error", createScopeForErrors: true);
@@ -64,13 +67,6 @@ app.UseAuthorization();
 app.UseAntiforgery();
 
 app.MapStaticAssets();
-app.MapGet("/health/live", () => Results.Ok(new { status = "live" }));
-app.MapGet("/health/ready", async (IDbContextFactory<TrussWebDbContext> factory, CancellationToken cancellationToken) =>
-{
-    await using var db = await factory.CreateDbContextAsync(cancellationToken);
-    var ready = await db.Database.CanConnectAsync(cancellationToken) && !(await db.Database.GetPendingMigrationsAsync(cancellationToken)).Any();
-    return ready ? Results.Ok(new { status = "ready" }) : Results.Json(new { status = "not ready" }, statusCode: StatusCodes.Status503ServiceUnavailable);
-});
 app.MapSignOut();
 app.MapRazorComponents<App>()
     .AddInteractiveServerRenderMode();

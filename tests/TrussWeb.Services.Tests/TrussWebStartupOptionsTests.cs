@@ -30,6 +30,24 @@ public sealed class TrussWebStartupOptionsTests
     }
 
     [Fact]
+    public void Start_up_migration_is_on_unless_the_key_says_false()
+    {
+        Assert.True(TrussWebStartupOptions.From(Config(), [], AppContext.BaseDirectory).MigrateOnStart);
+        Assert.True(TrussWebStartupOptions.From(Config((TrussWebStartupOptions.MigrateOnStartKey, "true")), [], AppContext.BaseDirectory).MigrateOnStart);
+        Assert.False(TrussWebStartupOptions.From(Config((TrussWebStartupOptions.MigrateOnStartKey, "False")), [], AppContext.BaseDirectory).MigrateOnStart);
+    }
+
+    [Fact]
+    public void An_absolute_web_seed_data_folder_also_serves_seeding_unless_the_seeding_key_is_set()
+    {
+        var folder = Path.Combine(AppContext.BaseDirectory, "seed-data");
+        var moved = Path.Combine(Path.GetTempPath(), "trussweb-seed-" + Guid.NewGuid().ToString("N"));
+        Assert.Equal(folder, TrussWebStartupOptions.From(Config((SeedData.FolderKey, folder)), [], moved).SeedDataPath);
+        Assert.Null(TrussWebStartupOptions.From(Config((SeedData.FolderKey, folder), (SeedData.PathKey, "/no/such/folder")), [], moved).SeedDataPath);
+        Assert.Null(TrussWebStartupOptions.From(Config((SeedData.FolderKey, "/no/such/folder")), [], moved).SeedDataPath);
+    }
+
+    [Fact]
     public void Generated_passwords_meet_the_password_rules_and_differ()
     {
         var a = TrussWebStartup.GeneratePassword();

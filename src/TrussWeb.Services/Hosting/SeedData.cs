@@ -6,6 +6,9 @@ public static class SeedData
     /// <summary>Configuration key of an explicit seed-data folder.</summary>
     public const string PathKey = "TrussWeb:SeedData:Path";
 
+    /// <summary>The web app's seed-data folder key; when it holds an absolute path and <see cref="PathKey"/> is unset, seeding uses it too (one setting for administrators).</summary>
+    public const string FolderKey = "TrussWeb:SeedData";
+
     public static string? Locate(string? configured, string contentRoot)
     {
         if (!string.IsNullOrWhiteSpace(configured))

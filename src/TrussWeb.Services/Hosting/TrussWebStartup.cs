@@ -24,15 +24,35 @@ public static class TrussWebStartup
         ArgumentNullException.ThrowIfNull(services);
         ArgumentNullException.ThrowIfNull(options);
         var logger = services.GetService<ILoggerFactory>()?.CreateLogger(typeof(TrussWebStartup).FullName!) ?? NullLogger.Instance;
-        await DatabaseMigrator.MigrateAsync(services, cancellationToken).ConfigureAwait(false);
-
         await using var scope = services.CreateAsyncScope();
         var factory = scope.ServiceProvider.GetRequiredService<IDbContextFactory<TrussWebDbContext>>();
+        if (options.MigrateOnStart)
+        {
+            await DatabaseMigrator.MigrateAsync(factory, cancellationToken).ConfigureAwait(false);
+        }
+        else
+        {
+            await RequireMigratedAsync(factory, cancellationToken).ConfigureAwait(false);
+        }
+
         await SeedCataloguesAsync(factory, options.SeedDataPath, logger, cancellationToken).ConfigureAwait(false);
         await CreateFirstAdministratorAsync(scope.ServiceProvider, options, logger).ConfigureAwait(false);
         if (options.Demo)
         {
             await DemoSeeder.SeedAsync(scope.ServiceProvider, options.Output, logger, cancellationToken).ConfigureAwait(false);
+        }
+    }
+
+    /// <summary>With the start-up migration off: refuses to start while the database has pending migrations, naming them and the remedy.</summary>
+    internal static async Task RequireMigratedAsync(IDbContextFactory<TrussWebDbContext> factory, CancellationToken cancellationToken)
+    {
+        await using var db = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
+        var pending = (await db.Database.GetPendingMigrationsAsync(cancellationToken).ConfigureAwait(false)).ToList();
+        if (pending.Count > 0)
+        {
+            throw new InvalidOperationException(
+                $"The database has {pending.Count} pending migration(s) ({string.Join(", ", pending)}) and {TrussWebStartupOptions.MigrateOnStartKey} is false: " +
+                "run 'TrussWeb.Web migrate' once (or start one instance with the setting on), then start this instance again.");
         }
     }
 

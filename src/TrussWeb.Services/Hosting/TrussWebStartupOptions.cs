@@ -12,9 +12,19 @@ public sealed record TrussWebStartupOptions
     /// <summary>Configuration key of the first administrator's e-mail.</summary>
     public const string AdminEmailKey = "TrussWeb:Admin:Email";
 
+    /// <summary>
+    /// Configuration key that turns the start-up migration off (default on). With several instances, run
+    /// <c>TrussWeb.Web migrate</c> once and start the others with it off; they then refuse to start on a
+    /// database with pending migrations.
+    /// </summary>
+    public const string MigrateOnStartKey = "TrussWeb:Database:MigrateOnStart";
+
     public const string DefaultAdminEmail = "admin@trussweb.local";
 
     public bool Demo { get; init; }
+
+    /// <summary>Apply pending migrations at start-up (default); when false, start-up fails if any are pending.</summary>
+    public bool MigrateOnStart { get; init; } = true;
 
     /// <summary>Seed-data folder; null: located with <see cref="SeedData.Locate"/>.</summary>
     public string? SeedDataPath { get; init; }
@@ -33,8 +43,13 @@ public sealed record TrussWebStartupOptions
         ArgumentNullException.ThrowIfNull(args);
         return new TrussWebStartupOptions
         {
+            MigrateOnStart = !string.Equals(configuration[MigrateOnStartKey]?.Trim(), "false", StringComparison.OrdinalIgnoreCase),
             Demo = args.Contains("--demo", StringComparer.Ordinal) || string.Equals(configuration[DemoKey], "true", StringComparison.OrdinalIgnoreCase),
-            SeedDataPath = SeedData.Locate(configuration[SeedData.PathKey], contentRoot),
+            SeedDataPath = SeedData.Locate(
+                string.IsNullOrWhiteSpace(configuration[SeedData.PathKey]) && Path.IsPathRooted(configuration[SeedData.FolderKey])
+                    ? configuration[SeedData.FolderKey]
+                    : configuration[SeedData.PathKey],
+                contentRoot),
             AdminEmail = string.IsNullOrWhiteSpace(configuration[AdminEmailKey]) ? DefaultAdminEmail : configuration[AdminEmailKey]!,
             AdminPassword = string.IsNullOrWhiteSpace(configuration[AdminPasswordKey]) ? null : configuration[AdminPasswordKey],
         };
