@@ -66,21 +66,46 @@ public sealed class AppProcess : IAsyncDisposable
             info.ArgumentList.Add(argument);
         }
 
-        foreach (var key in info.Environment.Keys.Where(k => k.StartsWith("TrussWeb__", StringComparison.OrdinalIgnoreCase)
-                     || k.StartsWith("ASPNETCORE_", StringComparison.OrdinalIgnoreCase) || k.StartsWith("Logging__", StringComparison.OrdinalIgnoreCase)).ToList())
-        {
-            info.Environment.Remove(key);
-        }
-
-        info.Environment["ASPNETCORE_ENVIRONMENT"] = "Production";
-        info.Environment["DOTNET_CLI_TELEMETRY_OPTOUT"] = "1";
-        foreach (var (key, value) in environment)
-        {
-            info.Environment[key] = value;
-        }
-
+        Configure(info, environment);
         var process = Process.Start(info) ?? throw new InvalidOperationException("dotnet did not start");
         return new AppProcess(process, port);
+    }
+
+    /// <summary>
+    /// Runs an administrator verb (<c>dotnet TrussWeb.Web.dll create-user ...</c>: the verb must be the first
+    /// argument, so no <c>--urls</c>) with the given environment and waits (bounded) for it to end.
+    /// </summary>
+    public static async Task<(int Code, string Output)> RunVerbAsync(string dll, IReadOnlyDictionary<string, string> environment, params string[] arguments)
+    {
+        var info = new ProcessStartInfo("dotnet")
+        {
+            WorkingDirectory = Path.GetDirectoryName(dll)!,
+            RedirectStandardOutput = true,
+            RedirectStandardError = true,
+            UseShellExecute = false,
+        };
+        info.ArgumentList.Add(dll);
+        foreach (var argument in arguments)
+        {
+            info.ArgumentList.Add(argument);
+        }
+
+        Configure(info, environment);
+        using var process = Process.Start(info) ?? throw new InvalidOperationException("dotnet did not start");
+        var stdout = process.StandardOutput.ReadToEndAsync();
+        var stderr = process.StandardError.ReadToEndAsync();
+        using var timeout = new CancellationTokenSource(StartTimeout);
+        try
+        {
+            await process.WaitForExitAsync(timeout.Token);
+        }
+        catch (OperationCanceledException)
+        {
+            process.Kill(entireProcessTree: true);
+            throw new TimeoutException($"dotnet {string.Join(' ', arguments.Take(2))} did not finish within {StartTimeout.TotalSeconds} s");
+        }
+
+        return (process.ExitCode, await stdout + await stderr);
     }
 
     /// <summary>Polls /health/ready until 200 (returns its JSON), failing when the process exits or the time is up.</summary>
@@ -131,6 +156,23 @@ public sealed class AppProcess : IAsyncDisposable
         }
 
         process.Dispose();
+    }
+
+    /// <summary>Inherited TrussWeb__*/ASPNETCORE_*/Logging__* variables are removed so only <paramref name="environment"/> counts.</summary>
+    private static void Configure(ProcessStartInfo info, IReadOnlyDictionary<string, string> environment)
+    {
+        foreach (var key in info.Environment.Keys.Where(k => k.StartsWith("TrussWeb__", StringComparison.OrdinalIgnoreCase)
+                     || k.StartsWith("ASPNETCORE_", StringComparison.OrdinalIgnoreCase) || k.StartsWith("Logging__", StringComparison.OrdinalIgnoreCase)).ToList())
+        {
+            info.Environment.Remove(key);
+        }
+
+        info.Environment["ASPNETCORE_ENVIRONMENT"] = "Production";
+        info.Environment["DOTNET_CLI_TELEMETRY_OPTOUT"] = "1";
+        foreach (var (key, value) in environment)
+        {
+            info.Environment[key] = value;
+        }
     }
 
     private static int FreePort()
