@@ -9,6 +9,7 @@ using TrussWeb.Data.Entities;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Hosting;
 using TrussWeb.Web.Components;
+using TrussWeb.Web.Security;
 
 // "--demo" is a switch without a value: keep it away from the command-line configuration provider,
 // which would otherwise take the next argument as its value.
@@ -31,6 +32,14 @@ builder.Services.AddTrussWebData(builder.Configuration, builder.Environment.Cont
 builder.Services.AddTrussWebServices(builder.Configuration);
 new IdentityBuilder(typeof(AppUser), typeof(IdentityRole), builder.Services).AddSignInManager();
 builder.Services.AddAuthentication(IdentityConstants.ApplicationScheme).AddIdentityCookies();
+builder.Services.AddScoped<IUserClaimsPrincipalFactory<AppUser>, DisplayNameClaimsPrincipalFactory>();
+builder.Services.ConfigureApplicationCookie(options =>
+{
+    options.LoginPath = ReturnUrls.SignInPath;
+    options.LogoutPath = ReturnUrls.SignOutPath;
+    options.AccessDeniedPath = ReturnUrls.DeniedPath;
+    options.ReturnUrlParameter = "returnUrl";
+});
 builder.Services.AddAuthorization();
 builder.Services.AddCascadingAuthenticationState();
 
@@ -62,6 +71,7 @@ app.MapGet("/health/ready", async (IDbContextFactory<TrussWebDbContext> factory,
     var ready = await db.Database.CanConnectAsync(cancellationToken) && !(await db.Database.GetPendingMigrationsAsync(cancellationToken)).Any();
     return ready ? Results.Ok(new { status = "ready" }) : Results.Json(new { status = "not ready" }, statusCode: StatusCodes.Status503ServiceUnavailable);
 });
+app.MapSignOut();
 app.MapRazorComponents<App>()
     .AddInteractiveServerRenderMode();
 
@@ -79,37 +89,3 @@ return 0;
 /// <summary>Entry point type, public for WebApplicationFactory in tests.</summary>
 public partial class Program;
 
-/// <summary>
-/// The signed-in user for services (<see cref="ICallerContext"/>) and for the audit stamps
-/// (<see cref="ICurrentUser"/>): the HTTP request's user, else the Blazor circuit's authentication state.
-/// </summary>
-internal sealed class SignedInCaller(IHttpContextAccessor http, IServiceProvider services) : ICallerContext, ICurrentUser
-{
-    private ClaimsPrincipal Principal
-    {
-        get
-        {
-            if (http.HttpContext?.User is { Identity.IsAuthenticated: true } user)
-            {
-                return user;
-            }
-
-            var state = services.GetService<AuthenticationStateProvider>();
-            try
-            {
-                var task = state?.GetAuthenticationStateAsync();
-                return task is { IsCompletedSuccessfully: true } ? task.Result.User : new ClaimsPrincipal();
-            }
-            catch (InvalidOperationException)
-            {
-                return new ClaimsPrincipal();
-            }
-        }
-    }
-
-    public string? UserId => Principal.Identity?.IsAuthenticated == true ? Principal.FindFirstValue(ClaimTypes.NameIdentifier) : null;
-
-    public string DisplayName => Principal.Identity?.Name ?? "anonymous";
-
-    public IReadOnlySet<string> Roles => Principal.FindAll(ClaimTypes.Role).Select(c => c.Value).ToHashSet(StringComparer.Ordinal);
-}
