@@ -36,7 +36,7 @@ public class AdminPageTests : TrussWebTestContext
 
         cut.Find("[data-testid=grade-save]").Click();
 
-        cut.WaitForAssertion(() => Assert.Contains("must not be less than fy = 355 MPa", cut.Find("[data-testid=grade-fu]").ParentElement!.ParentElement!.TextContent, StringComparison.Ordinal));
+        cut.WaitForAssertion(() => Assert.Contains("must not be less than fy = 355 MPa", cut.Find("[data-testid=grade-form]").TextContent, StringComparison.Ordinal));
         Assert.Empty(_catalogue.SavedGrades);
     }
 
@@ -84,12 +84,10 @@ public class AdminPageTests : TrussWebTestContext
         _catalogue.OnImport = (file, _) => ServiceResult<CatalogueImportSummary>.Invalid([
             new FieldError("t", "thickness must be greater than 0 mm (got 0)", file, 3),
             new FieldError("b", "leg must be at least 20 mm (got 5)", file, 7)]);
-        var dialogs = Render<MudBlazor.MudDialogProvider>();
         var cut = Render<CatalogueImportPanel>();
 
-        var upload = cut.InvokeAsync(() => cut.FindComponent<InputFile>().UploadFiles(InputFileContent.CreateFromText("family,designation\nAngle,L0\n", "angles-extra.csv")));
-        dialogs.WaitForAssertion(() => dialogs.FindAll("button").First(b => b.TextContent.Trim() == "Import").Click());
-        await upload;
+        cut.FindComponent<InputFile>().UploadFiles(InputFileContent.CreateFromText("family,designation\nAngle,L0\n", "angles-extra.csv"));
+        await Task.CompletedTask;
 
         cut.WaitForAssertion(() => Assert.Equal(2, cut.FindAll("[data-testid=import-error]").Count));
         Assert.Equal(["3", "7"], Texts(cut, "[data-testid=import-error-line]"));
