@@ -103,7 +103,7 @@ public partial class TrussPage
         var member = _truss?.Members.FirstOrDefault(m => m.Mark == mark);
         if (member is not null)
         {
-            Navigation.NavigateTo($"/members/{member.Id}");
+            Navigation.NavigateTo($"/members/{member.Id}?truss={_truss!.Id}");
         }
     }
 
