@@ -57,6 +57,7 @@ public sealed class AuthorizationTableTests
         ["IUserAdminService.SetRolesAsync"] = [Admin],
         ["IUserAdminService.ResetPasswordAsync"] = [Admin],
         ["IUserAdminService.SetLockedAsync"] = [Admin],
+        ["IUserAdminService.GetSystemInfoAsync"] = [Admin],
         ["IReviewService.SubmitAsync"] = [Admin, Lead, Designer],
         ["IReviewService.SubmitTrussAsync"] = [Admin, Lead, Designer],
         ["IReviewService.ResubmitAsync"] = [Admin, Lead, Designer],

@@ -66,6 +66,20 @@ public abstract partial class ServiceBehaviourTests
     }
 
     [Fact]
+    public async Task The_administrator_sees_the_installed_schema_and_versions_and_nobody_else_does()
+    {
+        await ProjectWithTrussAsync();
+
+        var info = Ok(await As(Admin).Users.GetSystemInfoAsync());
+
+        Assert.Equal(0, info.PendingMigrations);
+        Assert.False(string.IsNullOrEmpty(info.SchemaVersion));
+        Assert.Contains(Database.Provider == TrussWeb.Data.DatabaseProvider.Postgres ? "Npgsql" : "Sqlite", info.DatabaseProvider);
+        Assert.Equal("SANS 10162-1", info.StandardCode);
+        Assert.Equal(ResultKind.Forbidden, (await As(Designer).Users.GetSystemInfoAsync()).Kind);
+    }
+
+    [Fact]
     public async Task An_administrator_may_edit_any_project_and_manage_users()
     {
         var (_, truss) = await ProjectWithTrussAsync();

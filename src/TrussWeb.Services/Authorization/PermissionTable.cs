@@ -52,6 +52,7 @@ public static class PermissionTable
         [Key<IUserAdminService>(nameof(IUserAdminService.SetRolesAsync))] = AccessLevel.Administrator,
         [Key<IUserAdminService>(nameof(IUserAdminService.ResetPasswordAsync))] = AccessLevel.Administrator,
         [Key<IUserAdminService>(nameof(IUserAdminService.SetLockedAsync))] = AccessLevel.Administrator,
+        [Key<IUserAdminService>(nameof(IUserAdminService.GetSystemInfoAsync))] = AccessLevel.Administrator,
 
         [Key<IReviewService>(nameof(IReviewService.SubmitAsync))] = AccessLevel.ProjectEdit,
         [Key<IReviewService>(nameof(IReviewService.SubmitTrussAsync))] = AccessLevel.ProjectEdit,

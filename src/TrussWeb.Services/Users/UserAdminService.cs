@@ -48,6 +48,22 @@ internal sealed class UserAdminService(UserManager<AppUser> users, IDbContextFac
         return ServiceResult<UserView>.Ok(await ViewAsync(user).ConfigureAwait(false));
     }
 
+    public async Task<ServiceResult<SystemInfoView>> GetSystemInfoAsync(CancellationToken cancellationToken = default)
+    {
+        if (authorizer.Check<SystemInfoView>(Op(nameof(GetSystemInfoAsync))) is { } refusal)
+        {
+            return refusal;
+        }
+
+        await using var db = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
+        var applied = (await db.Database.GetAppliedMigrationsAsync(cancellationToken).ConfigureAwait(false)).ToList();
+        var pending = (await db.Database.GetPendingMigrationsAsync(cancellationToken).ConfigureAwait(false)).Count();
+        var standard = new Core.Standards.Sans10162.Sans10162Standard();
+        var core = typeof(Core.Caution).Assembly.GetName().Version?.ToString() ?? "unknown";
+        return ServiceResult<SystemInfoView>.Ok(new SystemInfoView(
+            db.Database.ProviderName ?? "unknown", applied.LastOrDefault(), pending, core, standard.Code, standard.Version));
+    }
+
     /// <summary>Creates a user with roles; used by the service, start-up and the command line.</summary>
     internal static async Task<(AppUser? User, IReadOnlyList<FieldError> Errors)> CreateAsync(UserManager<AppUser> users, CreateUserInput input)
     {

@@ -177,6 +177,11 @@ public sealed class FakeUserAdminService : IUserAdminService
 
     public Task<ServiceResult<UserView>> SetLockedAsync(string userId, bool locked, CancellationToken cancellationToken = default) => Change(userId, u => u with { IsLockedOut = locked });
 
+    public SystemInfoView SystemInfo { get; set; } = new("Microsoft.EntityFrameworkCore.Sqlite", "20261201000000_Test", 0, "0.1.0.0", "SANS 10162-1", "1.0.0");
+
+    public Task<ServiceResult<SystemInfoView>> GetSystemInfoAsync(CancellationToken cancellationToken = default) =>
+        Task.FromResult(ServiceResult<SystemInfoView>.Ok(SystemInfo));
+
     private Task<ServiceResult<UserView>> Change(string id, Func<UserView, UserView> change)
     {
         var i = Users.FindIndex(u => u.Id == id);
