@@ -12,4 +12,7 @@ if [ -z "${TrussWeb__Database__ConnectionString:-}" ] && [ -z "${TrussWeb__Datab
   database=("--TrussWeb:Database:ConnectionString=Data Source=$PWD/data/trussweb.db")
 fi
 dotnet build src/TrussWeb.Web -c Release -nologo -v quiet
-exec dotnet run --no-build --project src/TrussWeb.Web -c Release -- --urls "$urls" --demo "${database[@]}" "$@"
+# Runs the built app in the Production environment (friendly error pages, no developer exception page);
+# set ASPNETCORE_ENVIRONMENT=Development to change that.
+export ASPNETCORE_ENVIRONMENT="${ASPNETCORE_ENVIRONMENT:-Production}"
+exec dotnet src/TrussWeb.Web/bin/Release/net10.0/TrussWeb.Web.dll --urls "$urls" --demo "${database[@]}" "$@"

@@ -38,6 +38,7 @@ if [ -z "$ok" ]; then echo "the app did not answer on port $port"; cat "$log"; e
 home=$(curl -fsSL "http://127.0.0.1:$port/")
 grep -q "competent engineer" <<<"$home" || { echo "home page lacks the caution text"; cat "$log"; exit 1; }
 curl -fsS "http://127.0.0.1:$port/health/ready" -o /dev/null || { echo "/health/ready did not answer 200"; cat "$log"; exit 1; }
+curl -fsS "http://127.0.0.1:$port/_content/MudBlazor/MudBlazor.min.css" -o /dev/null || { echo "the component library's styles are not served"; cat "$log"; exit 1; }
 kill $app; wait $app 2>/dev/null || true
 echo "smoke passed"
 

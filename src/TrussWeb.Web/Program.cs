@@ -15,6 +15,10 @@ using TrussWeb.Web.Security;
 // "--demo" is a switch without a value: keep it away from the command-line configuration provider,
 // which would otherwise take the next argument as its value.
 var builder = WebApplication.CreateBuilder(args.Where(a => a != "--demo").ToArray());
+
+// Serve the packages' static files (MudBlazor, Plotly) when the app runs from its build output in any
+// environment, not only in Development; in a published folder the files are in wwwroot and this is a no-op.
+builder.WebHost.UseStaticWebAssets();
 if (AdminCommands.IsVerb(args))
 {
     builder.Logging.SetMinimumLevel(LogLevel.Warning);

@@ -179,4 +179,20 @@ public abstract partial class ServiceBehaviourTests
         var detail = Ok(await As(Designer).Catalogue.GetSectionAsync(section.Designation));
         Assert.Contains(detail.Properties, p => p.Symbol == "A" && p.Value > 0);
     }
+
+    [Fact]
+    public async Task Double_angle_listing_is_built_from_the_angle_rows_only()
+    {
+        var all = Ok(await As(Designer).Catalogue.ListSectionsAsync(new SectionFilter()));
+        var angles = all.Count(i => i.Family == TrussWeb.Core.Sections.SectionFamily.Angle);
+
+        var pairs = Ok(await As(Designer).Catalogue.ListSectionsAsync(new SectionFilter(TrussWeb.Core.Sections.SectionFamily.DoubleAngle)));
+
+        Assert.Equal(angles, pairs.Count);
+        Assert.All(pairs, p =>
+        {
+            Assert.Equal(TrussWeb.Core.Sections.SectionFamily.DoubleAngle, p.Family);
+            Assert.StartsWith("2L", p.Designation);
+        });
+    }
 }

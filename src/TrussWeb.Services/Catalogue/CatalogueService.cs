@@ -30,9 +30,11 @@ internal sealed class CatalogueService(IDbContextFactory<TrussWebDbContext> fact
             query = query.Where(r => r.IsActive);
         }
 
-        if (filter.Family is { } family && family != SectionFamily.DoubleAngle)
+        if (filter.Family is { } family)
         {
-            var name = family.ToString();
+            // Double angles are built from the angle rows (2026-12-02: without this the hollow rows were
+            // cast to angle dimensions and the member page of every double-angle member failed).
+            var name = (family == SectionFamily.DoubleAngle ? SectionFamily.Angle : family).ToString();
             query = query.Where(r => r.Family == name);
         }
 
