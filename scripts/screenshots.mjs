@@ -186,7 +186,7 @@ try {
     await page.goto(`${baseUrl}/sections`);
     await page.waitForSelector('table tbody tr');
     await settle(page);
-    await shot(page, 'sections-run.png');
+    await shot(page, 'sections.png');
     await context.close();
   }
 
