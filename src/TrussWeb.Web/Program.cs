@@ -19,6 +19,11 @@ var builder = WebApplication.CreateBuilder(args.Where(a => a != "--demo").ToArra
 // Serve the packages' static files (MudBlazor, Plotly) when the app runs from its build output in any
 // environment, not only in Development; in a published folder the files are in wwwroot and this is a no-op.
 builder.WebHost.UseStaticWebAssets();
+
+// Database commands and per-request framework lines are logged only as warnings unless a configuration asks for more (appsettings.json is
+// not read when the app is started from another folder, e.g. the repository root by scripts/start.sh).
+builder.Logging.AddFilter("Microsoft.EntityFrameworkCore", LogLevel.Warning);
+builder.Logging.AddFilter("Microsoft.AspNetCore", LogLevel.Warning);
 if (AdminCommands.IsVerb(args))
 {
     builder.Logging.SetMinimumLevel(LogLevel.Warning);
