@@ -5,6 +5,8 @@ namespace TrussWeb.Core.Tests.Standards.Sans10162;
 
 public class FlexuralTorsionalCubicTests
 {
+    // Inputs of the identity tests are arbitrary stresses (MPa) and offsets (mm); the expected value is
+    // the identity's other side, computed independently in the test, not a published figure.
     [Theory]
     [InlineData(100, 200, 300)]
     [InlineData(300, 200, 100)]
@@ -18,7 +20,7 @@ public class FlexuralTorsionalCubicTests
 
     [Theory]
     [InlineData(300, 150, 400, 20, 50)]
-    [InlineData(75, 118, 683, 12.2, 48.64)]
+    [InlineData(75, 118, 683, 12.2, 48.64)] // the stresses and offsets of Example AC40 (Carleton CIVE 3205 notes, CSA S16-14), r0 = √2366 mm
     [InlineData(1e4, 10, 20, 30, 31)]
     public void Zero_x0_returns_the_singly_symmetric_formula(double fe1, double fe2, double fez, double y0, double r0)
     {
