@@ -13,11 +13,16 @@ if [ -z "${TRUSSWEB_TEST_PG:-}" ] && [ ! -x /usr/lib/postgresql/15/bin/initdb ] 
   apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq postgresql-15 >/dev/null
 fi
 
+# The browser journeys (tests/TrussWeb.E2E) drive the system Chromium; a fresh machine gets it from Debian.
+if [ -z "${TRUSSWEB_CHROMIUM:-}" ] && ! command -v chromium >/dev/null 2>&1; then
+  apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null
+fi
+
 echo "== build (Release)"
 dotnet build TrussWeb.sln -c Release -nologo -v quiet
 
 echo "== unit tests"
-for project in tests/TrussWeb.*.Tests; do
+for project in tests/TrussWeb.*.Tests tests/TrussWeb.E2E; do
   dotnet test "$project" -c Release --no-build -nologo --logger "console;verbosity=minimal"
 done
 

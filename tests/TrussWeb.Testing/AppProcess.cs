@@ -4,7 +4,7 @@ using System.Net.Sockets;
 using System.Text;
 using System.Text.Json;
 
-namespace TrussWeb.Deploy.Tests.Support;
+namespace TrussWeb.Testing;
 
 /// <summary>
 /// The web app run as a child process (<c>dotnet TrussWeb.Web.dll --urls http://127.0.0.1:&lt;port&gt;</c>) with

@@ -1,6 +1,6 @@
 using System.Reflection;
 
-namespace TrussWeb.Deploy.Tests.Support;
+namespace TrussWeb.Testing;
 
 /// <summary>The repository the tests run in and the web app built in the test assembly's configuration.</summary>
 public static class Repo
