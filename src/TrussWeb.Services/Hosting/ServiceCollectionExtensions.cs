@@ -11,6 +11,7 @@ using TrussWeb.Services.Catalogue;
 using TrussWeb.Services.Common;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Design;
+using TrussWeb.Services.Exports;
 using TrussWeb.Services.Projects;
 using TrussWeb.Services.Review;
 using TrussWeb.Services.Trusses;
@@ -50,6 +51,12 @@ public static class ServiceCollectionExtensions
         services.AddScoped<IUserAdminService, UserAdminService>();
         services.AddScoped<IReviewService, ReviewService>();
         services.TryAddSingleton<IReviewEvents, ReviewEvents>();
+        services.TryAddSingleton(_ => ExportOptions.From(configuration, configuration["contentRoot"] ?? Directory.GetCurrentDirectory()));
+        services.TryAddSingleton<IExportRenderer, ReportRenderer>();
+        services.TryAddSingleton<ExportJobRunner>();
+        services.TryAddSingleton<IExportEvents>(sp => sp.GetRequiredService<ExportJobRunner>());
+        services.AddHostedService(sp => sp.GetRequiredService<ExportJobRunner>());
+        services.AddScoped<IExportService, ExportService>();
 
         services.AddDataProtection().SetApplicationName("TrussWeb").PersistKeysToDbContext<TrussWebDbContext>();
         services.AddIdentityCore<AppUser>(ConfigureIdentity)
