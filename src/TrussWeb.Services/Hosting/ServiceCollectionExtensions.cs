@@ -96,10 +96,13 @@ public static class ServiceCollectionExtensions
             new DesignService(work),
             new CatalogueService(factory, authorizer, clock),
             new UserAdminService(scope.GetRequiredService<UserManager<AppUser>>(), factory, authorizer, clock),
-            new ReviewService(factory, authorizer, clock, events));
+            new ReviewService(factory, authorizer, clock, events),
+            scope.GetService<ExportJobRunner>() is { } runner
+                ? new ExportService(factory, authorizer, runner, new ReviewService(factory, authorizer, clock, events))
+                : null);
     }
 }
 
-/// <summary>The service interfaces bound to one caller.</summary>
+/// <summary>The service interfaces bound to one caller (Exports is null where no export runner is registered).</summary>
 public sealed record ServiceSet(IProjectService Projects, ITrussService Trusses, IDesignService Design, ICatalogueService Catalogue, IUserAdminService Users,
-    IReviewService Review);
+    IReviewService Review, IExportService? Exports = null);
