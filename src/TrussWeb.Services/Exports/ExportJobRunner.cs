@@ -122,7 +122,6 @@ public sealed class ExportJobRunner : BackgroundService, IExportEvents
 
     protected override async Task ExecuteAsync(CancellationToken stoppingToken)
     {
-        Directory.CreateDirectory(Options.Folder);
         CleanUp();
         var workers = Enumerable.Range(0, Math.Clamp(Options.Concurrency, 1, 2)).Select(_ => WorkAsync(stoppingToken)).ToList();
         workers.Add(SweepAsync(stoppingToken));
