@@ -46,7 +46,7 @@ public sealed class ExportJobRunner : BackgroundService, IExportEvents
     internal IReadOnlyList<ExportJob> ForProject(Guid projectId) =>
         jobs.Values.Where(j => j.ProjectId == projectId && j.ExpiresUtc > Now).OrderByDescending(j => j.RequestedUtc).ToList();
 
-    internal ExportJob Enqueue(Guid projectId, ExportKind kind, ExportFormat format, bool final, ICallerContext caller)
+    internal ExportJob Enqueue(Guid projectId, ExportKind kind, ExportFormat format, bool final, string userId, string userName)
     {
         var now = Now;
         var job = new ExportJob
@@ -56,8 +56,8 @@ public sealed class ExportJobRunner : BackgroundService, IExportEvents
             Kind = kind,
             Format = format,
             FinalSet = final,
-            RequestedById = caller.UserId ?? "",
-            RequestedBy = caller.DisplayName,
+            RequestedById = userId,
+            RequestedBy = userName,
             RequestedUtc = now,
             ExpiresUtc = now + Options.Retention,
         };

@@ -101,6 +101,7 @@ internal sealed class ExportService(IDbContextFactory<TrussWebDbContext> factory
     private async Task<ServiceResult<ExportJobView>> StartAsync(Guid projectId, ExportKind kind, ExportFormat format, bool final, string operation,
         CancellationToken cancellationToken)
     {
+        string requestedBy;
         await using (var db = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false))
         {
             var (refusal, _) = await authorizer.CheckProjectAsync<ExportJobView>(db, projectId, operation, cancellationToken).ConfigureAwait(false);
@@ -108,6 +109,11 @@ internal sealed class ExportService(IDbContextFactory<TrussWebDbContext> factory
             {
                 return refusal;
             }
+
+            // The person's name as the documents print it (the sign-in name may be the e-mail address).
+            var userId = authorizer.Caller.UserId;
+            var stored = await db.Users.AsNoTracking().Where(u => u.Id == userId).Select(u => u.DisplayName).FirstOrDefaultAsync(cancellationToken).ConfigureAwait(false);
+            requestedBy = string.IsNullOrWhiteSpace(stored) ? authorizer.Caller.DisplayName : stored;
         }
 
         if (!Enum.IsDefined(kind))
@@ -131,7 +137,7 @@ internal sealed class ExportService(IDbContextFactory<TrussWebDbContext> factory
             }
         }
 
-        return ServiceResult<ExportJobView>.Ok(runner.Enqueue(projectId, kind, format, final, authorizer.Caller).View());
+        return ServiceResult<ExportJobView>.Ok(runner.Enqueue(projectId, kind, format, final, authorizer.Caller.UserId ?? "", requestedBy).View());
     }
 
     private async Task<(ExportJob? Job, ServiceResult<T>? Refusal, string? Role)> JobAsync<T>(Guid jobId, string operation, CancellationToken cancellationToken)
