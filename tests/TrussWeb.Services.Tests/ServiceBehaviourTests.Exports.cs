@@ -140,6 +140,8 @@ public abstract partial class ServiceBehaviourTests
         }
 
         Assert.Equal([$"{job.JobId:N}.pdf"], FilesIn(runner.Options.Folder).Select(Path.GetFileName));
+        var audit = Assert.Single(Ok(await As(Lead).Review.GetAuditAsync(project.Id, null)), a => a.Action == "ExportProduced");
+        Assert.Equal((job.FileName, job.Sha256, "Dineo Designer"), (audit.NewValue, audit.Fingerprint, audit.UserName));
     }
 
     [Fact]
@@ -225,6 +227,26 @@ public abstract partial class ServiceBehaviourTests
         Assert.False(job.HasFile);
         Assert.Null(job.FileName);
         Assert.Equal(ResultKind.NotFound, file.Kind);
+        Assert.Empty(FilesIn(runner.Options.Folder));
+    }
+
+    [Fact]
+    public async Task A_cancelled_export_ends_cancelled_and_leaves_no_file()
+    {
+        var (project, _) = await ProjectWithTrussAsync();
+        var renderer = new EndlessRenderer();
+        var (provider, runner) = await ExportHostAsync(renderer);
+        var exports = Exports(Designer, provider);
+        var started = Ok(await exports.StartAsync(project.Id, ExportKind.CalculationBook, ExportFormat.Pdf));
+        Assert.True(renderer.Rendering.Wait(TimeSpan.FromMinutes(1)), "the renderer never started");
+
+        Assert.Equal(ResultKind.Forbidden, (await Exports(Checker, provider).CancelAsync(started.JobId)).Kind);
+        Ok(await exports.CancelAsync(started.JobId));
+        var job = await FinishedAsync(runner, exports, started);
+
+        Assert.Equal((ExportJobStatus.Cancelled, "The export was cancelled."), (job.Status, job.Error));
+        Assert.False(job.HasFile);
+        Assert.Equal(ResultKind.NotFound, (await exports.OpenFileAsync(job.JobId)).Kind);
         Assert.Empty(FilesIn(runner.Options.Folder));
     }
 
@@ -326,6 +348,24 @@ public abstract partial class ServiceBehaviourTests
         return sheet.Descendants<Row>().Select(r => r.Elements<Cell>().Select(c => c.DataType?.Value == CellValues.InlineString
             ? c.InlineString?.InnerText ?? ""
             : c.CellValue?.Text ?? "").ToList()).ToList();
+    }
+
+    /// <summary>Reports progress until the job's cancellation stops it through the progress callback.</summary>
+    private sealed class EndlessRenderer : IExportRenderer
+    {
+        public ManualResetEventSlim Rendering { get; } = new();
+
+        public byte[] Render(ExportKind kind, ExportFormat format, ReportHeader header, IReadOnlyList<TrussReportData> trusses, IProgress<ReportProgress> progress)
+        {
+            Rendering.Set();
+            for (var i = 0; i < 6000; i++)
+            {
+                progress.Report(new ReportProgress(1, 2, "still going"));
+                Thread.Sleep(10);
+            }
+
+            throw new TimeoutException("the job was never cancelled");
+        }
     }
 
     private sealed class ThrowingRenderer : IExportRenderer

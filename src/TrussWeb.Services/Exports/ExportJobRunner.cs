@@ -8,7 +8,9 @@ using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
 using TrussWeb.Data;
 using TrussWeb.Reports.Model;
+using TrussWeb.Services.Common;
 using TrussWeb.Services.Contracts;
+using TrussWeb.Services.Hosting;
 
 namespace TrussWeb.Services.Exports;
 
@@ -196,9 +198,15 @@ public sealed class ExportJobRunner : BackgroundService, IExportEvents
                 stream.Flush(flushToDisk: true);
             }
 
-            File.Move(temp, final, overwrite: false);
             var sha = Convert.ToHexStringLower(SHA256.HashData(bytes));
             var name = ExportNames.FileName(model.ProjectCode, model.Revision, job.Kind, job.Format, job.FinalSet, producedAt);
+
+            // The audit keeps what was produced, by whom, with the file's hash, after the job record has expired.
+            AuditWriter.AddAction(db, new FixedCaller(job.RequestedById, job.RequestedBy), clock, job.ProjectId, "Project", job.ProjectId.ToString(), "ExportProduced",
+                "File", null, name, sha, $"{ExportNames.KindText(job.Kind)} {ExportNames.Extension(job.Format).ToUpperInvariant()}{(job.FinalSet ? " (final set)" : "")}, " +
+                $"{bytes.LongLength} bytes; {model.Header.ApprovalStatusText}");
+            await db.SaveChangesAsync(CancellationToken.None).ConfigureAwait(false);
+            File.Move(temp, final, overwrite: false);
             job.Succeed(name, final, bytes.LongLength, sha, Now);
             succeeded = true;
             logger.LogInformation("Export {JobId} ({Kind} {Format}) of project {ProjectId} done: {Size} bytes, SHA-256 {Sha}", job.Id, job.Kind, job.Format, job.ProjectId,
