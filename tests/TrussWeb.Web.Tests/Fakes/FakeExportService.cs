@@ -10,6 +10,9 @@ public sealed class FakeExportService : IExportService, IExportEvents
     public ExportReadiness Readiness { get; set; } = new(new IssueStatus(Guid.Empty, 40, 12, 0, false, "12 of 40 members are approved; 28 are not."), false,
         "Only the project lead can issue the final set.", "12 of 40 members approved — files will be marked preliminary (28 not approved)");
 
+    /// <summary>When set, what GetReadinessAsync answers instead of Ok(Readiness).</summary>
+    public ServiceResult<ExportReadiness>? ReadinessRefusal { get; set; }
+
     public List<ExportJobView> Jobs { get; } = [];
 
     public List<(ExportKind Kind, ExportFormat Format, bool Final)> Started { get; } = [];
@@ -47,7 +50,7 @@ public sealed class FakeExportService : IExportService, IExportEvents
     }
 
     public Task<ServiceResult<ExportReadiness>> GetReadinessAsync(Guid projectId, CancellationToken cancellationToken = default) =>
-        Task.FromResult(ServiceResult<ExportReadiness>.Ok(Readiness));
+        Task.FromResult(ReadinessRefusal ?? ServiceResult<ExportReadiness>.Ok(Readiness));
 
     public Task<ServiceResult<ExportJobView>> StartAsync(Guid projectId, ExportKind kind, ExportFormat format, CancellationToken cancellationToken = default)
     {

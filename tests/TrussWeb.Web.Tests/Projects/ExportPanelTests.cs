@@ -98,4 +98,15 @@ public class ExportPanelTests : TrussWebTestContext
         await DisposeComponentsAsync();
         Assert.Equal(0, _exports.Subscribers);
     }
+
+    [Fact]
+    public void A_caller_the_service_refuses_sees_the_message_and_hears_no_job_changes()
+    {
+        _exports.ReadinessRefusal = ServiceResult<ExportReadiness>.NotFound("The project does not exist or you are not a member of it.");
+        var cut = RenderPanel();
+
+        Assert.Equal("The project does not exist or you are not a member of it.", cut.Find("[data-testid=export-load-error]").TextContent.Trim());
+        Assert.Empty(cut.FindAll("[data-testid=export-book-pdf]"));
+        Assert.Equal(0, _exports.Subscribers);
+    }
 }

@@ -26,19 +26,27 @@ public partial class ExportPanel
     protected override async Task OnParametersSetAsync()
     {
         _subscription?.Dispose();
-        _subscription = Events.Subscribe(ProjectId, OnJobChanged);
+        _subscription = null;
         await LoadAsync();
     }
 
+    /// <summary>Reads the approval state; only a caller the service lets in is subscribed to the project's jobs (then the list is read, so no change is missed).</summary>
     private async Task LoadAsync()
     {
         var readiness = await Exports.GetReadinessAsync(ProjectId);
-        var jobs = await Exports.ListJobsAsync(ProjectId);
         _loadMessage = readiness.IsOk ? null : readiness.Message ?? "The export area could not be loaded.";
         _readiness = readiness.Value;
+        if (!readiness.IsOk)
+        {
+            return;
+        }
+
+        _subscription ??= Events.Subscribe(ProjectId, OnJobChanged);
+        var jobs = await Exports.ListJobsAsync(ProjectId);
         if (jobs.Value is { } list)
         {
-            _jobs = list.ToList();
+            var known = _jobs.ToDictionary(j => j.JobId);
+            _jobs = list.Select(j => known.TryGetValue(j.JobId, out var k) && k.IsFinished ? k : j).ToList();
         }
     }
 
