@@ -77,6 +77,7 @@ app.UseAntiforgery();
 
 app.MapStaticAssets();
 app.MapSignOut();
+app.MapExportDownloads();
 app.MapRazorComponents<App>()
     .AddInteractiveServerRenderMode();
 

@@ -77,6 +77,11 @@ public abstract partial class ServiceBehaviourTests : IAsyncLifetime
         {
             await database.DisposeAsync();
         }
+
+        foreach (var folder in exportFolders.Where(Directory.Exists))
+        {
+            Directory.Delete(folder, recursive: true);
+        }
     }
 
     protected TrussWebStartupOptions Options(bool demo, string? adminPassword = "first-admin-pass-1") => new()

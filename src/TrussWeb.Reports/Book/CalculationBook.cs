@@ -16,8 +16,8 @@ public static class CalculationBook
 {
     public const string Title = "Calculation book";
 
-    /// <summary>Renders the book.</summary>
-    public static RenderedPdf Render(ReportHeader header, IReadOnlyList<TrussReportData> trusses)
+    /// <summary>Renders the book; <paramref name="progress"/> (called on the rendering thread) hears of every truss overview and member sheet laid out.</summary>
+    public static RenderedPdf Render(ReportHeader header, IReadOnlyList<TrussReportData> trusses, IProgress<ReportProgress>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(header);
         ArgumentNullException.ThrowIfNull(trusses);
@@ -31,15 +31,18 @@ public static class CalculationBook
         var entryCount = trusses.Count + trusses.Sum(t => t.Design.Members.Count);
         var contentsFirst = ContentsSection.Reserve(canvas, ContentsSection.PagesFor(canvas, entryCount));
         var entries = new List<ContentsEntry>(entryCount);
+        var done = 0;
         foreach (var truss in trusses)
         {
             TrussSection.Write(canvas, truss);
+            progress?.Report(new ReportProgress(++done, entryCount, $"Truss {truss.Name}"));
             entries.Add(new ContentsEntry($"Truss {truss.Name}: elevation, actions, combinations, force and utilization diagrams", FirstPageOf(canvas, truss.Name, ""), truss.Name));
             foreach (var m in truss.Design.Members)
             {
                 MemberSheet.Write(canvas, truss, m);
                 var start = FirstPageOf(canvas, truss.Name, m.Mark);
                 entries.Add(new ContentsEntry($"{m.Mark} · {m.Design.Designation} · U = {Display.Sig(m.Design.Utilization)} · {truss.ReviewOf(m.Mark).State}", start, truss.Name, m.Mark));
+                progress?.Report(new ReportProgress(++done, entryCount, $"{truss.Name} {m.Mark}"));
             }
         }
 

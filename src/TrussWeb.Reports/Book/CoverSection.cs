@@ -21,6 +21,7 @@ internal static class CoverSection
         t.Row([TableCell.Of(("Location", c.Style.BodyBold, null)), Or(h.Location)]);
         t.Row([TableCell.Of(("Revision", c.Style.BodyBold, null)), h.Revision]);
         t.Row([TableCell.Of(("Date", c.Style.BodyBold, null)), h.ProducedAtText]);
+        t.Row([TableCell.Of(("Produced by", c.Style.BodyBold, null)), Or(h.ProducedBy)]);
         t.Row([TableCell.Of(("Designer", c.Style.BodyBold, null)), Or(h.Designer)]);
         t.Row([TableCell.Of(("Checker", c.Style.BodyBold, null)), Or(h.Checker)]);
         t.Row([TableCell.Of(("Status", c.Style.BodyBold, null)), TableCell.Of((h.ApprovalStatusText, c.Style.BodyBold, null), (h.BannerText ?? "For construction", null, null))]);
@@ -28,6 +29,11 @@ internal static class CoverSection
         t.Row([TableCell.Of(("Design standard", c.Style.BodyBold, null)), h.StandardEdition]);
         t.Row([TableCell.Of(("Software", c.Style.BodyBold, null)), $"TrussWeb {h.AppVersion}"]);
         t.End(30);
+        foreach (var note in h.Notes)
+        {
+            c.Paragraph(note, c.Style.BodyBold, spaceAfter: 3);
+        }
+
         c.Heading("Caution", c.Style.SubHeading, 30);
         c.Paragraph(Caution.Text, c.Style.Body);
     }

@@ -24,6 +24,12 @@ public sealed record ReportHeader
     /// <summary>When the document was produced, UTC (from the caller's TimeProvider).</summary>
     public required DateTimeOffset ProducedAtUtc { get; init; }
 
+    /// <summary>Who produced the document (the signed-in user who asked for it); "" when not stated.</summary>
+    public string ProducedBy { get; init; } = "";
+
+    /// <summary>Statements the caller wants on the cover and in the file header, e.g. members left out because they have no stored result.</summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+
     public required string AppVersion { get; init; }
 
     /// <summary>Design standard and edition, e.g. <c>Sans10162Standard.EditionText</c>.</summary>

@@ -96,7 +96,7 @@ internal static class PageFrame
         }
 
         var bottom = c.PageHeight - PdfCanvas.Margin - 8;
-        var produced = $"Produced {h.ProducedAtText} · Rev {h.Revision} · {h.ProjectNumber}";
+        var produced = $"Produced {h.ProducedAtText} · Rev {h.Revision} · {h.ProjectNumber}" + (string.IsNullOrWhiteSpace(h.ProducedBy) ? "" : $" · by {h.ProducedBy}");
         var pageText = $"Page {page} of {total}";
         var pf = c.Style.SubHeading;
         var pw = TextLayout.Width(g, pageText, pf);

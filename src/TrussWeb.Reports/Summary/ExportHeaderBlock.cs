@@ -8,6 +8,12 @@ internal static class ExportHeaderBlock
 {
     public static IReadOnlyList<(string Label, string Value)> Lines(ReportHeader h, string title) =>
     [
+        .. Fixed(h, title),
+        .. h.Notes.Select(n => ("Note", n)),
+    ];
+
+    private static IReadOnlyList<(string Label, string Value)> Fixed(ReportHeader h, string title) =>
+    [
         ("Document", title),
         ("Project", h.ProjectName),
         ("Project number", h.ProjectNumber),
@@ -17,6 +23,7 @@ internal static class ExportHeaderBlock
         ("Designer", h.Designer),
         ("Checker", h.Checker),
         ("Produced at (UTC)", h.ProducedAtText),
+        ("Produced by", h.ProducedBy),
         ("Approval status", h.ApprovalStatusText),
         ("Issue status", h.BannerText ?? "For construction: every member approved, final issue"),
         ("Standard", h.StandardEdition),

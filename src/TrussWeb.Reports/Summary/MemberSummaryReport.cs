@@ -54,6 +54,10 @@ public static class MemberSummaryReport
         c.Heading($"{Title}: {h.ProjectName}", c.Style.Heading, 20);
         c.Paragraph($"{table.Rows.Count} members in {table.TrussTotals.Count} truss(es). {h.ApprovalStatusText}. Forces are the largest over the ultimate " +
             "combinations; utilization is the largest demand over resistance of all checks of the member.", c.Style.Body, spaceAfter: 5);
+        foreach (var note in h.Notes)
+        {
+            c.Paragraph(note, c.Style.BodyBold, spaceAfter: 3);
+        }
     }
 
     private static void Members(PdfCanvas c, MemberSummaryTable table)

@@ -70,6 +70,13 @@ public static class PermissionTable
         [Key<IReviewService>(nameof(IReviewService.ExportAuditCsvAsync))] = AccessLevel.ProjectRead,
         [Key<IReviewService>(nameof(IReviewService.GetIssueStatusAsync))] = AccessLevel.ProjectRead,
         [Key<IReviewService>(nameof(IReviewService.IssueFinalSetAsync))] = AccessLevel.ProjectManage,
+        [Key<IExportService>(nameof(IExportService.GetReadinessAsync))] = AccessLevel.ProjectRead,
+        [Key<IExportService>(nameof(IExportService.StartAsync))] = AccessLevel.ProjectRead,
+        [Key<IExportService>(nameof(IExportService.StartFinalSetAsync))] = AccessLevel.ProjectManage,
+        [Key<IExportService>(nameof(IExportService.GetJobAsync))] = AccessLevel.ProjectRead,
+        [Key<IExportService>(nameof(IExportService.ListJobsAsync))] = AccessLevel.ProjectRead,
+        [Key<IExportService>(nameof(IExportService.OpenFileAsync))] = AccessLevel.ProjectRead,
+        [Key<IExportService>(nameof(IExportService.CancelAsync))] = AccessLevel.ProjectRead,
     };
 
     public static string Key<TService>(string method) => $"{typeof(TService).Name}.{method}";

@@ -11,6 +11,7 @@ using TrussWeb.Services.Catalogue;
 using TrussWeb.Services.Common;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Design;
+using TrussWeb.Services.Exports;
 using TrussWeb.Services.Projects;
 using TrussWeb.Services.Review;
 using TrussWeb.Services.Trusses;
@@ -50,6 +51,12 @@ public static class ServiceCollectionExtensions
         services.AddScoped<IUserAdminService, UserAdminService>();
         services.AddScoped<IReviewService, ReviewService>();
         services.TryAddSingleton<IReviewEvents, ReviewEvents>();
+        services.TryAddSingleton(_ => ExportOptions.From(configuration, configuration["contentRoot"] ?? Directory.GetCurrentDirectory()));
+        services.TryAddSingleton<IExportRenderer, ReportRenderer>();
+        services.TryAddSingleton<ExportJobRunner>();
+        services.TryAddSingleton<IExportEvents>(sp => sp.GetRequiredService<ExportJobRunner>());
+        services.AddHostedService(sp => sp.GetRequiredService<ExportJobRunner>());
+        services.AddScoped<IExportService, ExportService>();
 
         services.AddDataProtection().SetApplicationName("TrussWeb").PersistKeysToDbContext<TrussWebDbContext>();
         services.AddIdentityCore<AppUser>(ConfigureIdentity)
@@ -89,10 +96,13 @@ public static class ServiceCollectionExtensions
             new DesignService(work),
             new CatalogueService(factory, authorizer, clock),
             new UserAdminService(scope.GetRequiredService<UserManager<AppUser>>(), factory, authorizer, clock),
-            new ReviewService(factory, authorizer, clock, events));
+            new ReviewService(factory, authorizer, clock, events),
+            scope.GetService<ExportJobRunner>() is { } runner
+                ? new ExportService(factory, authorizer, runner, new ReviewService(factory, authorizer, clock, events))
+                : null);
     }
 }
 
-/// <summary>The service interfaces bound to one caller.</summary>
+/// <summary>The service interfaces bound to one caller (Exports is null where no export runner is registered).</summary>
 public sealed record ServiceSet(IProjectService Projects, ITrussService Trusses, IDesignService Design, ICatalogueService Catalogue, IUserAdminService Users,
-    IReviewService Review);
+    IReviewService Review, IExportService? Exports = null);

@@ -568,7 +568,7 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
             .ToListAsync(cancellationToken).ConfigureAwait(false))
         .Select(m => new MemberState(m.TrussId, ReviewStateMachine.Parse(m.ReviewState))).ToList();
 
-    private static async Task<IssueStatus> IssueStatusAsync(TrussWebDbContext db, Guid projectId, CancellationToken cancellationToken)
+    internal static async Task<IssueStatus> IssueStatusAsync(TrussWebDbContext db, Guid projectId, CancellationToken cancellationToken)
     {
         var states = await MemberStatesAsync(db, projectId, cancellationToken).ConfigureAwait(false);
         var total = states.Count;

@@ -14,7 +14,7 @@ public static class TestDatabaseServices
     /// A service provider built the way the app builds it (AddTrussWebData + AddTrussWebServices from
     /// configuration), whose caller (and audit-stamp user) is whatever <paramref name="callers"/> holds now.
     /// </summary>
-    public static ServiceProvider BuildServices(this TestDatabase database, FakeTimeProvider clock, CallerHolder callers)
+    public static ServiceProvider BuildServices(this TestDatabase database, FakeTimeProvider clock, CallerHolder callers, Action<IServiceCollection>? configure = null)
     {
         var configuration = database.Configuration();
         var services = new ServiceCollection();
@@ -25,6 +25,7 @@ public static class TestDatabaseServices
         services.AddScoped<ICurrentUser>(sp => sp.GetRequiredService<CallerHolder>().Current);
         services.AddTrussWebData(configuration, Path.GetTempPath());
         services.AddTrussWebServices(configuration);
+        configure?.Invoke(services);
         return services.BuildServiceProvider(new ServiceProviderOptions { ValidateScopes = true });
     }
 }

@@ -13,10 +13,14 @@ public sealed class DemoAppFactory : WebApplicationFactory<Program>
 {
     private readonly string _file = Path.Combine(Path.GetTempPath(), $"tw-web-tests-{Guid.NewGuid():N}.db");
 
+    /// <summary>The export folder of this app (deleted on dispose).</summary>
+    public string ExportFolder { get; } = Path.Combine(Path.GetTempPath(), $"tw-web-exports-{Guid.NewGuid():N}");
+
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
         builder.UseSetting("TrussWeb:Database:ConnectionString", $"Data Source={_file}");
         builder.UseSetting(TrussWebStartupOptions.DemoKey, "true");
+        builder.UseSetting("TrussWeb:Exports:Folder", ExportFolder);
         builder.UseEnvironment("Development");
     }
 
@@ -38,6 +42,11 @@ public sealed class DemoAppFactory : WebApplicationFactory<Program>
     {
         base.Dispose(disposing);
         Microsoft.Data.Sqlite.SqliteConnection.ClearAllPools();
+        if (Directory.Exists(ExportFolder))
+        {
+            Directory.Delete(ExportFolder, recursive: true);
+        }
+
         foreach (var f in new[] { _file, _file + "-wal", _file + "-shm" })
         {
             if (File.Exists(f))

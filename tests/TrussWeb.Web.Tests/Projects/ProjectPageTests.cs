@@ -18,6 +18,9 @@ public class ProjectPageTests : TrussWebTestContext
             Roles.ProjectLead, DateTime.UtcNow, DateTime.UtcNow, []);
         Services.AddSingleton<IProjectService>(_projects);
         Services.AddSingleton<ICatalogueService, FakeCatalogueService>();
+        var exports = new FakeExportService();
+        Services.AddSingleton<IExportService>(exports);
+        Services.AddSingleton<IExportEvents>(exports);
         Services.AddSingleton<ICallerContext>(new FakeCaller("u1", "Lead Person", Roles.ProjectLead));
     }
 
