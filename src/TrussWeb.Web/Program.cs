@@ -77,6 +77,7 @@ app.UseAntiforgery();
 
 app.MapStaticAssets();
 app.MapSignOut();
+TrussWeb.Web.Components.Review.AuditCsvEndpoint.MapAuditCsv(app);
 app.MapRazorComponents<App>()
     .AddInteractiveServerRenderMode();
 
