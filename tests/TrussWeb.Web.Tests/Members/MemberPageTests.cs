@@ -19,6 +19,7 @@ public class MemberPageTests : TrussWebTestContext
     {
         _design.Stored = ServiceViews.Detail(_member);
         _trusses.Detail = ServiceViews.Truss(_member);
+        Reviews.Reviews[ServiceViews.IdOf(_member)] = Fakes.FakeReviewService.View(ServiceViews.IdOf(_member), _member.Mark, MemberReviewState.NotSubmitted, [ReviewAction.Submit]);
         Services.AddSingleton<IDesignService>(_design);
         Services.AddSingleton<ITrussService>(_trusses);
         Services.AddSingleton<ICatalogueService>(_catalogue);

@@ -215,6 +215,7 @@ public partial class MemberReviewPanel
             {
                 ResultKind.Invalid when _errors.Count == result.Errors.Count => null,
                 ResultKind.Conflict => "Someone changed this member meanwhile: " + result.Message + " The review is shown as stored now; your text is kept.",
+                ResultKind.Invalid when result.Errors.Count > 0 => string.Join(" ", result.Errors.Select(e => e.Message)),
                 _ => result.Message ?? "The review step was refused.",
             };
             if (_refusal is not null)

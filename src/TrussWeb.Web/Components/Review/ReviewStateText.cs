@@ -1,5 +1,6 @@
 using MudBlazor;
 using TrussWeb.Services.Contracts;
+using TrussWeb.Services.Review;
 
 namespace TrussWeb.Web.Components.Review;
 
@@ -10,21 +11,17 @@ public static class ReviewStateText
     public static IReadOnlyList<MemberReviewState> Order { get; } =
         [MemberReviewState.NotSubmitted, MemberReviewState.AwaitingCheck, MemberReviewState.Returned, MemberReviewState.Approved, MemberReviewState.ApprovalStale];
 
-    public static string Words(MemberReviewState state) => state switch
+    /// <summary>The state in the words the service uses in its messages (<see cref="ReviewStateMachine.Describe"/>), capitalised.</summary>
+    public static string Words(MemberReviewState state)
     {
-        MemberReviewState.NotSubmitted => "Not submitted",
-        MemberReviewState.AwaitingCheck => "Awaiting check",
-        MemberReviewState.Approved => "Approved",
-        MemberReviewState.Returned => "Returned with comments",
-        MemberReviewState.ApprovalStale => "Approval no longer valid",
-        _ => state.ToString(),
-    };
+        var words = ReviewStateMachine.Describe(state);
+        return words.Length == 0 ? words : char.ToUpperInvariant(words[0]) + words[1..];
+    }
 
     /// <summary>The stored name (<c>TrussMember.ReviewState</c>: "Draft" reads as not submitted) in words.</summary>
     public static string Words(string? stored) => Words(Parse(stored));
 
-    public static MemberReviewState Parse(string? stored) =>
-        Enum.TryParse<MemberReviewState>(stored, ignoreCase: false, out var state) && Enum.IsDefined(state) ? state : MemberReviewState.NotSubmitted;
+    public static MemberReviewState Parse(string? stored) => ReviewStateMachine.Parse(stored);
 
     public static Color ColorOf(MemberReviewState state) => state switch
     {

@@ -167,7 +167,7 @@ public partial class TrussReviewSection
             foreach (var r in _rows.Where(r => _selected.Contains(r.MemberId)).OrderBy(r => r.Mark, StringComparer.Ordinal).ToList())
             {
                 var result = await call(r.MemberId);
-                rows.Add((r.Mark, result.IsOk, result.IsOk ? verb : "refused: " + (result.Message ?? result.Kind.ToString())));
+                rows.Add((r.Mark, result.IsOk, result.IsOk ? verb : "refused: " + Reason(result)));
             }
 
             var ok = rows.Count(r => r.Ok);
@@ -187,6 +187,9 @@ public partial class TrussReviewSection
             _busy = false;
         }
     }
+
+    private static string Reason<T>(ServiceResult<T> result) =>
+        result.Errors.Count > 0 ? string.Join(" ", result.Errors.Select(e => e.Message)) : result.Message ?? result.Kind.ToString();
 
     public void Dispose()
     {
