@@ -124,7 +124,7 @@ public partial class MemberReviewPanel
             return;
         }
 
-        _ = InvokeAsync(async () =>
+        LiveRefresh.Dispatch(InvokeAsync, async () =>
         {
             await ReloadAsync();
             if (_view is not null)

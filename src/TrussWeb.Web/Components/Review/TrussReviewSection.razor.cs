@@ -75,7 +75,7 @@ public partial class TrussReviewSection
             return;
         }
 
-        _ = InvokeAsync(async () =>
+        LiveRefresh.Dispatch(InvokeAsync, async () =>
         {
             await ReloadAsync();
             await OnChanged.InvokeAsync();
