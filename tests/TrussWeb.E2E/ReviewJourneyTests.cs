@@ -109,6 +109,45 @@ public sealed class ReviewJourneyTests(DemoApp app, BrowserSession browser)
         await shots.TakeAsync(page, "bc1");
     }
 
+    [Fact]
+    public async Task The_project_shows_review_counts_the_audit_log_and_its_csv_download()
+    {
+        var shots = new Screenshots("review-project");
+        await using var context = await browser.NewContextAsync();
+        var page = await Pages.SignInAsync(context, app, app.Checker);
+
+        await page.GotoAsync(app.Url("/projects"));
+        await page.ClickAsync("[data-testid=project-link]");
+        await page.WaitForSelectorAsync("[data-testid=rollup-table]");
+        await Pages.SettleAsync(page);
+        await shots.TakeAsync(page, "project-rollup");
+        // Every demo member is counted once in the project row (DemoSeeder: 8 + 8 chords, 6 diagonals, 7 verticals).
+        var totals = await page.Locator("[data-testid=rollup-total] td.tw-num").AllInnerTextsAsync();
+        Assert.Equal(29, totals.Sum(int.Parse));
+
+        await page.ClickAsync("[data-testid=audit-link]");
+        await page.WaitForSelectorAsync("[data-testid=audit-table] [data-testid=audit-row]");
+        await Pages.SettleAsync(page);
+        await shots.TakeAsync(page, "project-audit");
+        Assert.Equal(0, await page.Locator("[data-testid=audit-table] button, [data-testid=audit-table] input").CountAsync());
+
+        var download = await page.RunAndWaitForDownloadAsync(() => page.ClickAsync("[data-testid=audit-csv-link]"));
+        var file = await download.PathAsync();
+        var csv = await File.ReadAllTextAsync(file!);
+        Assert.StartsWith("Id,UtcTime,UserId,UserName,EntityType,EntityId,Action,Field,OldValue,NewValue,Comment,Fingerprint", csv, StringComparison.Ordinal);
+        Assert.EndsWith(".csv", download.SuggestedFilename, StringComparison.Ordinal);
+
+        // The truss page lists every member with its review state.
+        await page.GotoAsync(app.Url("/projects"));
+        await page.ClickAsync("[data-testid=project-link]");
+        await page.ClickAsync("a[href^='/trusses/']");
+        await page.WaitForSelectorAsync("[data-testid=truss-review-table] [data-testid=truss-review-row]");
+        await Pages.SettleAsync(page);
+        Assert.Equal(29, await page.Locator("[data-testid=truss-review-row]").CountAsync());
+        await page.Locator("[data-testid=truss-review]").ScrollIntoViewIfNeededAsync();
+        await shots.TakeAsync(page, "truss-review");
+    }
+
     private async Task OpenMemberAsync(IPage page, string mark = Mark)
     {
         await page.GotoAsync(app.Url("/projects"));
