@@ -63,6 +63,15 @@ public partial class MemberReviewPanel
         }
     }
 
+    // Listening starts after a render in the browser (never in a prerender, which is gone before any event could reach it).
+    protected override void OnAfterRender(bool firstRender)
+    {
+        if (_view is { } view)
+        {
+            Subscribe(view.ProjectId);
+        }
+    }
+
     /// <summary>Reads the review again (after a design save, or when an event arrives).</summary>
     public async Task ReloadAsync()
     {
@@ -77,7 +86,6 @@ public partial class MemberReviewPanel
         _loadFailure = null;
         var view = result.Value!;
         _view = view;
-        Subscribe(view.ProjectId);
         _changes = null;
         if (view.State == MemberReviewState.ApprovalStale)
         {

@@ -42,9 +42,11 @@ public partial class TrussReviewSection
 
     protected override async Task OnParametersSetAsync()
     {
-        _subscription ??= Events.Subscribe(ProjectId, OnReviewEvent);
         await ReloadAsync();
     }
+
+    // Listening starts after a render in the browser (never in a prerender, which is gone before any event could reach it).
+    protected override void OnAfterRender(bool firstRender) => _subscription ??= Events.Subscribe(ProjectId, OnReviewEvent);
 
     public async Task ReloadAsync()
     {
