@@ -116,9 +116,9 @@ try {
     await settle(page);
     await shot(page, 'truss.png');
 
-    // A web or chord member from the results table. Single sections only: the section picker of a
-    // double-angle (2L) member currently fails to render (the catalogue list for the double-angle
-    // family casts every active section to an angle), so such members are skipped here.
+    // A web or chord member from the results table. Single sections, so the screenshot shows the section
+    // drawing and resistance curve (a double-angle member page shows a note there instead; it renders, and
+    // tests/TrussWeb.E2E/ReviewJourneyTests opens one).
     const memberHref = await page.evaluate(() => {
       const rows = [...document.querySelectorAll('[data-testid=member-results] tr')]
         .map((tr) => ({ link: tr.querySelector('[data-testid=member-link]'), cells: [...tr.querySelectorAll('td')].map((td) => td.innerText.trim()) }))

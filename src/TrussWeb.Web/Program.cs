@@ -78,6 +78,7 @@ app.UseAntiforgery();
 app.MapStaticAssets();
 app.MapSignOut();
 app.MapExportDownloads();
+TrussWeb.Web.Components.Review.AuditCsvEndpoint.MapAuditCsv(app);
 app.MapRazorComponents<App>()
     .AddInteractiveServerRenderMode();
 

@@ -65,6 +65,7 @@ public sealed class AuthorizationTableTests
         ["IReviewService.ApproveAsync"] = [Admin, Lead, Checker],
         ["IReviewService.ReturnAsync"] = [Admin, Lead, Checker],
         ["IReviewService.ReassignCheckerAsync"] = [Admin, Lead],
+        ["IReviewService.ListEligibleCheckersAsync"] = [Admin, Lead, Designer, Checker],
         ["IReviewService.GetMemberReviewAsync"] = [Admin, Lead, Designer, Checker],
         ["IReviewService.GetTrussReviewAsync"] = [Admin, Lead, Designer, Checker],
         ["IReviewService.GetChangesSinceApprovalAsync"] = [Admin, Lead, Designer, Checker],

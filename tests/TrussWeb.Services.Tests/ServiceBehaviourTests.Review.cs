@@ -411,3 +411,26 @@ public abstract partial class ServiceBehaviourTests
         Assert.Contains(",ReviewReturn,ReviewState,AwaitingCheck,Returned,\"Two lines,\nwith \"\"quotes\"\"\",", csv, StringComparison.Ordinal);
     }
 }
+
+public abstract partial class ServiceBehaviourTests
+{
+    [Fact]
+    public async Task Eligible_checkers_are_checkers_and_leads_of_the_project_never_the_designer_of_record()
+    {
+        var (project, _, tc1) = await SubmittedTc1Async();
+
+        // A submission by the designer: the checker and the lead, never the designer themself.
+        var forDesigner = Ok(await As(Designer).Review.ListEligibleCheckersAsync(project.Id, null));
+        Assert.Equal(["Chris Checker", "Lerato Lead"], forDesigner.Select(c => c.DisplayName));
+        Assert.Equal([Roles.Checker, Roles.ProjectLead], forDesigner.Select(c => c.ProjectRole));
+
+        // A submission by the lead leaves the lead out (they would be the designer of record).
+        Assert.Equal(["Chris Checker"], Ok(await As(Lead).Review.ListEligibleCheckersAsync(project.Id, null)).Select(c => c.DisplayName));
+
+        // Reassigning TC1 (designed by the designer): the lead may name themself.
+        Assert.Equal(["Chris Checker", "Lerato Lead"], Ok(await As(Lead).Review.ListEligibleCheckersAsync(project.Id, tc1.Id)).Select(c => c.DisplayName));
+
+        Assert.Equal(ResultKind.NotFound, (await As(Outsider).Review.ListEligibleCheckersAsync(project.Id, null)).Kind);
+        Assert.Equal(ResultKind.NotFound, (await As(Lead).Review.ListEligibleCheckersAsync(project.Id, Guid.NewGuid())).Kind);
+    }
+}

@@ -61,6 +61,7 @@ public static class PermissionTable
         [Key<IReviewService>(nameof(IReviewService.ApproveAsync))] = AccessLevel.ProjectCheck,
         [Key<IReviewService>(nameof(IReviewService.ReturnAsync))] = AccessLevel.ProjectCheck,
         [Key<IReviewService>(nameof(IReviewService.ReassignCheckerAsync))] = AccessLevel.ProjectManage,
+        [Key<IReviewService>(nameof(IReviewService.ListEligibleCheckersAsync))] = AccessLevel.ProjectRead,
         [Key<IReviewService>(nameof(IReviewService.GetMemberReviewAsync))] = AccessLevel.ProjectRead,
         [Key<IReviewService>(nameof(IReviewService.GetTrussReviewAsync))] = AccessLevel.ProjectRead,
         [Key<IReviewService>(nameof(IReviewService.GetChangesSinceApprovalAsync))] = AccessLevel.ProjectRead,

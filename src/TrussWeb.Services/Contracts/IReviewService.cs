@@ -28,6 +28,13 @@ public interface IReviewService
     /// <summary>Project lead: gives a member awaiting check (or returned) to another checker.</summary>
     Task<ServiceResult<MemberReviewView>> ReassignCheckerAsync(Guid memberId, string checkerUserId, CancellationToken cancellationToken = default);
 
+    /// <summary>
+    /// Project members who may be named checker (project role Checker or ProjectLead). For a submission by the caller
+    /// (<paramref name="reassignMemberId"/> null) the caller is left out, as they become the designer of record; for
+    /// reassigning a member, its designer of record is left out. The service still checks the choice on the call.
+    /// </summary>
+    Task<ServiceResult<IReadOnlyList<EligibleChecker>>> ListEligibleCheckersAsync(Guid projectId, Guid? reassignMemberId, CancellationToken cancellationToken = default);
+
     Task<ServiceResult<MemberReviewView>> GetMemberReviewAsync(Guid memberId, CancellationToken cancellationToken = default);
 
     /// <summary>Every member of a truss with its review.</summary>
@@ -73,6 +80,9 @@ public sealed record MemberReviewView(
     string? ApprovedFingerprint,
     string? CurrentFingerprint,
     IReadOnlyList<ReviewAction> AvailableActions);
+
+/// <summary>A project member who may check members, with their project role.</summary>
+public sealed record EligibleChecker(string UserId, string DisplayName, string ProjectRole);
 
 /// <summary>Outcome of submitting a truss: the members submitted and those left as they were (with why).</summary>
 public sealed record TrussSubmission(IReadOnlyList<MemberReviewView> Submitted, IReadOnlyList<SkippedMember> Skipped);

@@ -179,6 +179,38 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
         return await SaveAsync(db, member, role, cancellationToken).ConfigureAwait(false);
     }
 
+    public async Task<ServiceResult<IReadOnlyList<EligibleChecker>>> ListEligibleCheckersAsync(Guid projectId, Guid? reassignMemberId, CancellationToken cancellationToken = default)
+    {
+        await using var db = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
+        var (refusal, _) = await authorizer.CheckProjectAsync<IReadOnlyList<EligibleChecker>>(db, projectId, Op(nameof(ListEligibleCheckersAsync)), cancellationToken).ConfigureAwait(false);
+        if (refusal is not null)
+        {
+            return refusal;
+        }
+
+        var excluded = Caller.UserId;
+        if (reassignMemberId is { } memberId)
+        {
+            var member = await db.TrussMembers.AsNoTracking().Where(m => m.Id == memberId && m.Truss!.ProjectId == projectId)
+                .Select(m => new { m.DesignerOfRecordId }).FirstOrDefaultAsync(cancellationToken).ConfigureAwait(false);
+            if (member is null)
+            {
+                return ServiceResult<IReadOnlyList<EligibleChecker>>.NotFound(NotFoundMessage);
+            }
+
+            excluded = member.DesignerOfRecordId;
+        }
+
+        var rows = await db.ProjectMemberships.AsNoTracking()
+            .Where(m => m.ProjectId == projectId && (m.Role == Roles.Checker || m.Role == Roles.ProjectLead))
+            .Join(db.Users.AsNoTracking(), m => m.UserId, u => u.Id, (m, u) => new { u.Id, u.DisplayName, m.Role })
+            .ToListAsync(cancellationToken).ConfigureAwait(false);
+        IReadOnlyList<EligibleChecker> checkers = rows.Where(r => !string.Equals(r.Id, excluded, StringComparison.Ordinal))
+            .OrderBy(r => r.DisplayName, StringComparer.CurrentCultureIgnoreCase)
+            .Select(r => new EligibleChecker(r.Id, r.DisplayName, r.Role)).ToList();
+        return ServiceResult<IReadOnlyList<EligibleChecker>>.Ok(checkers);
+    }
+
     public async Task<ServiceResult<MemberReviewView>> GetMemberReviewAsync(Guid memberId, CancellationToken cancellationToken = default)
     {
         await using var db = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);

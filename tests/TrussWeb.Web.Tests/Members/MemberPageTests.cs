@@ -19,6 +19,7 @@ public class MemberPageTests : TrussWebTestContext
     {
         _design.Stored = ServiceViews.Detail(_member);
         _trusses.Detail = ServiceViews.Truss(_member);
+        Reviews.Reviews[ServiceViews.IdOf(_member)] = Fakes.FakeReviewService.View(ServiceViews.IdOf(_member), _member.Mark, MemberReviewState.NotSubmitted, [ReviewAction.Submit]);
         Services.AddSingleton<IDesignService>(_design);
         Services.AddSingleton<ITrussService>(_trusses);
         Services.AddSingleton<ICatalogueService>(_catalogue);
@@ -102,6 +103,40 @@ public class MemberPageTests : TrussWebTestContext
         cut.WaitForAssertion(() => Assert.Equal(Core.Records.Display.Sig(heavier.Design.Utilization), cut.Find("[data-testid=member-utilization]").TextContent.Trim()));
         Assert.Equal(3, _design.Updates.Single().Version);
         Assert.Empty(cut.FindAll("[data-testid=member-dirty]"));
+    }
+
+    [Fact]
+    public void A_design_save_reloads_the_review_so_a_lapsed_approval_shows_at_once()
+    {
+        var id = ServiceViews.IdOf(_member);
+        Reviews.Reviews[id] = Fakes.FakeReviewService.View(id, _member.Mark, MemberReviewState.Approved, []);
+        var cut = RenderPage();
+        cut.WaitForAssertion(() => Assert.Equal("Approved", cut.Find("[data-testid=review-state]").GetAttribute("data-state")));
+
+        // The service's design run makes the approval stale in the same unit of work as the save.
+        _design.OnUpdate = input =>
+        {
+            Reviews.Reviews[id] = Fakes.FakeReviewService.View(id, _member.Mark, MemberReviewState.ApprovalStale, [ReviewAction.Submit]);
+            return ServiceResult<MemberDesignDetail>.Ok(_design.Stored! with { Overrides = input.Overrides, MemberVersion = input.Version + 1 });
+        };
+        Input(cut, "input-Ky").Change("0.9");
+        cut.Find("[data-testid=member-save]").Click();
+
+        cut.WaitForAssertion(() => Assert.Equal("ApprovalStale", cut.Find("[data-testid=review-state]").GetAttribute("data-state")));
+        Assert.NotNull(cut.Find("[data-testid=review-submit]"));
+    }
+
+    [Fact]
+    public void Review_steps_wait_while_the_design_has_unsaved_changes()
+    {
+        var cut = RenderPage();
+        cut.WaitForAssertion(() => cut.Find("[data-testid=review-submit]"));
+
+        Input(cut, "input-Ky").Change("0.9");
+
+        cut.WaitForAssertion(() => Assert.NotNull(cut.Find("[data-testid=review-blocked]")));
+        Assert.True(cut.Find("[data-testid=review-submit]").HasAttribute("disabled"));
+        Assert.Empty(Reviews.Calls);
     }
 
     [Fact]

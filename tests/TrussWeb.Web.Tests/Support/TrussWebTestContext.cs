@@ -11,7 +11,15 @@ public abstract class TrussWebTestContext : BunitContext, IAsyncLifetime
         JSInterop.Mode = JSRuntimeMode.Loose;
         Services.AddMudServices();
         Services.AddSingleton(TestData.Catalogue);
+        Services.AddSingleton<TrussWeb.Services.Contracts.IReviewService>(Reviews);
+        Services.AddSingleton<TrussWeb.Services.Contracts.IReviewEvents>(ReviewHub);
     }
+
+    /// <summary>The review service every page and panel gets (pages embed review panels); tests set its reviews.</summary>
+    protected Fakes.FakeReviewService Reviews { get; } = new();
+
+    /// <summary>The real in-process event hub: a test publishes on it as the service would after a commit.</summary>
+    protected TrussWeb.Services.Review.ReviewEvents ReviewHub { get; } = new();
 
     Task IAsyncLifetime.InitializeAsync() => Task.CompletedTask;
 

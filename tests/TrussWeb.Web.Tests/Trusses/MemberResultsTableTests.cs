@@ -27,7 +27,7 @@ public class MemberResultsTableTests : TrussWebTestContext
         Assert.Contains("123", t1Row);
         Assert.Contains("ULS 1", t1Row);
         Assert.Contains("Compression 13.3", t1Row);
-        Assert.Contains("Draft", t1Row);
+        Assert.Contains("Not submitted", t1Row); // the stored initial "Draft" reads as not submitted (docs/dev/review.md)
         var b3Row = links.Single(l => l.TextContent.Trim() == "B3").Closest("tr")!.TextContent;
         Assert.Contains("98.7", b3Row);
         Assert.Contains("ULS 2", b3Row);

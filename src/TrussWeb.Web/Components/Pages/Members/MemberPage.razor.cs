@@ -8,6 +8,7 @@ using TrussWeb.Core.Records;
 using TrussWeb.Core.Sections;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Web.Components.Members;
+using TrussWeb.Web.Components.Review;
 using TrussWeb.Web.Components.Sections;
 
 namespace TrussWeb.Web.Components.Pages.Members;
@@ -53,6 +54,7 @@ public partial class MemberPage
     private Material? _material;
     private EffectiveLengths _lengths = new() { Lx = 1, Ly = 1, Lz = 1 };
     private IReadOnlyList<GradeView> _grades = [];
+    private MemberReviewPanel? _reviewPanel;
 
     [Parameter] public Guid Id { get; set; }
 
@@ -232,6 +234,12 @@ public partial class MemberPage
             {
                 case ResultKind.Ok:
                     Show(result.Value!, resetForm: true);
+                    if (_reviewPanel is not null)
+                    {
+                        // The save may have made an approval stale or changed the designer of record: show the review as stored now.
+                        await _reviewPanel.ReloadAsync();
+                    }
+
                     Snackbar.Add($"Saved; member {result.Value!.Row.Mark} re-designed, utilization {Display.Sig(result.Value.Row.Utilization)}.", Severity.Success);
                     break;
                 case ResultKind.Invalid:
@@ -263,6 +271,24 @@ public partial class MemberPage
         finally
         {
             _saving = false;
+        }
+    }
+
+    /// <summary>
+    /// A review step bumps the member's version: re-read the stored design so the next save carries it. With unsaved
+    /// edits the form is left alone; their save then meets a conflict that names the reviewer.
+    /// </summary>
+    private async Task ReviewChangedAsync(MemberReviewView review)
+    {
+        if (_detail is null || IsDirty || _saving)
+        {
+            return;
+        }
+
+        var design = await Design.GetMemberDesignAsync(_trussId, Id);
+        if (design.IsOk)
+        {
+            Show(design.Value!, resetForm: true);
         }
     }
 

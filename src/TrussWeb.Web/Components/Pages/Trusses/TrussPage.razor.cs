@@ -27,6 +27,7 @@ public partial class TrussPage
     private GroupsEditor? _groups;
     private ActionsEditor? _actions;
     private CombinationsEditor? _combinations;
+    private Review.TrussReviewSection? _review;
 
     [Parameter, EditorRequired] public required Guid TrussId { get; set; }
 
@@ -81,7 +82,11 @@ public partial class TrussPage
     {
         _truss = fresh;
         await LoadDesignAsync();
+        await ReloadReviewAsync();
     }
+
+    /// <summary>A save re-designs the truss: approvals may have lapsed and designers of record changed.</summary>
+    private Task ReloadReviewAsync() => _review?.ReloadAsync() ?? Task.CompletedTask;
 
     private async Task SizingAcceptedAsync(TrussDesignView design)
     {
@@ -93,6 +98,7 @@ public partial class TrussPage
 
         _design = design;
         _elevation = ElevationInput.From(_truss!, _design);
+        await ReloadReviewAsync();
     }
 
     // Re-render so NavigationLock's browser prompt follows the editors' state.
