@@ -66,7 +66,7 @@ public static class SecurityHeaders
 
     /// <summary>The policy for a response whose page renders <paramref name="importMap"/> (the &lt;ImportMap /&gt; inline script), or none.</summary>
     public static string Policy(ImportMapDefinition? importMap) =>
-        string.Format(System.Globalization.CultureInfo.InvariantCulture, BasePolicy, importMap is null ? "" : $" 'sha256-{Hash(importMap.ToJson())}'");
+        string.Format(System.Globalization.CultureInfo.InvariantCulture, BasePolicy, importMap is null ? "" : $" 'sha256-{Hash(importMap.ToString())}'");
 
     private static string Hash(string script) => Convert.ToBase64String(SHA256.HashData(Encoding.UTF8.GetBytes(script)));
 }
