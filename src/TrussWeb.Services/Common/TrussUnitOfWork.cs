@@ -45,12 +45,19 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
 
     /// <summary>
     /// Re-designs the truss from its tracked (edited) state, stages new snapshots, audits every change
-    /// and saves. Returns the design issues (the inputs are saved even when the design cannot run) or a conflict.
+    /// and saves. With <paramref name="refuseUndesignable"/>, an edit after which the truss cannot be designed is refused and nothing is saved. Returns the design issues (the inputs are saved even when the design cannot run) or a conflict.
     /// </summary>
     public async Task<(ServiceResult<T>? Failure, IReadOnlyList<ValidationIssue> DesignIssues, DesignRunner.Outcome? Outcome)> CommitAsync<T>(
-        TrussWebDbContext db, Truss truss, string? auditAction, CancellationToken cancellationToken)
+        TrussWebDbContext db, Truss truss, string? auditAction, CancellationToken cancellationToken,
+        Func<IReadOnlyList<ValidationIssue>, ServiceResult<T>>? refuseUndesignable = null)
     {
         var (outcome, issues, events) = await DesignRunner.DesignAndStageAsync(db, truss, Caller, Clock, cancellationToken).ConfigureAwait(false);
+        if (outcome is null && refuseUndesignable is not null)
+        {
+            // nothing is saved: the caller's context is dropped with its staged changes
+            return (refuseUndesignable(issues), issues, null);
+        }
+
         AuditWriter.AddChanges(db, Caller, Clock, truss.ProjectId, outcome?.TrussSnapshot.Fingerprint);
         if (auditAction is not null || outcome is not null)
         {
