@@ -103,6 +103,30 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
         return ServiceResult<TrussDetail>.Ok(TrussViews.ToDetail(truss, snapshots, role, canEdit, messages.Select(m => m.ToString()).ToList()));
     }
 
+    /// <summary>Attempts of one save when it loses races only on the truss's snapshot rows.</summary>
+    public const int SnapshotRaceAttempts = 8;
+
+    /// <summary>
+    /// Every save re-designs the whole truss and replaces its snapshots, so two users saving different rows of one
+    /// truss at once race on the snapshot rows only. Such a lost race is not the caller's conflict: the whole attempt
+    /// (fresh context, the caller's versions checked again) runs again after a short random pause. A conflict on a
+    /// row the caller edited, or one still unresolved after <see cref="SnapshotRaceAttempts"/>, is returned.
+    /// </summary>
+    public static async Task<ServiceResult<T>> RetrySnapshotRacesAsync<T>(Func<Task<ServiceResult<T>>> attempt, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(attempt);
+        for (var i = 1; ; i++)
+        {
+            var result = await attempt().ConfigureAwait(false);
+            if (result.Kind != ResultKind.Conflict || i >= SnapshotRaceAttempts || result.Conflicts.Any(c => c.EntityType != nameof(DesignSnapshot)))
+            {
+                return result;
+            }
+
+            await Task.Delay(Random.Shared.Next(5, 40 * i), cancellationToken).ConfigureAwait(false);
+        }
+    }
+
     /// <summary>Sets the version EF compares on save to the one the caller loaded.</summary>
     public static void ExpectVersion(TrussWebDbContext db, TrackedEntity row, long loadedVersion) =>
         db.Entry(row).Property(r => r.Version).OriginalValue = loadedVersion;

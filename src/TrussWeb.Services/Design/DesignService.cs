@@ -180,9 +180,14 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
         return ServiceResult<Done>.Ok(default);
     }
 
-    public async Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken = default)
+    public Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(input);
+        return TrussUnitOfWork.RetrySnapshotRacesAsync(() => UpdateMemberDesignOnceAsync(trussId, memberId, input, cancellationToken), cancellationToken);
+    }
+
+    private async Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignOnceAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken)
+    {
         await using var db = await work.CreateAsync(cancellationToken).ConfigureAwait(false);
         var (truss, refusal, _) = await work.LoadAsync<MemberDesignDetail>(db, trussId, Op(nameof(UpdateMemberDesignAsync)), cancellationToken).ConfigureAwait(false);
         if (refusal is not null)
