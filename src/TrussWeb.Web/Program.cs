@@ -65,6 +65,7 @@ if (AdminCommands.IsVerb(args))
 await TrussWebStartup.InitialiseAsync(app.Services, TrussWebStartupOptions.From(builder.Configuration, args, builder.Environment.ContentRootPath));
 
 app.UseTrussWebDeployment();
+app.UseTrussWebSecurityHeaders();
 if (!app.Environment.IsDevelopment())
 {
     app.UseExceptionHandler("/Error", createScopeForErrors: true);

@@ -45,12 +45,19 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
 
     /// <summary>
     /// Re-designs the truss from its tracked (edited) state, stages new snapshots, audits every change
-    /// and saves. Returns the design issues (the inputs are saved even when the design cannot run) or a conflict.
+    /// and saves. With <paramref name="refuseUndesignable"/>, an edit after which the truss cannot be designed is refused and nothing is saved. Returns the design issues (the inputs are saved even when the design cannot run) or a conflict.
     /// </summary>
     public async Task<(ServiceResult<T>? Failure, IReadOnlyList<ValidationIssue> DesignIssues, DesignRunner.Outcome? Outcome)> CommitAsync<T>(
-        TrussWebDbContext db, Truss truss, string? auditAction, CancellationToken cancellationToken)
+        TrussWebDbContext db, Truss truss, string? auditAction, CancellationToken cancellationToken,
+        Func<IReadOnlyList<ValidationIssue>, ServiceResult<T>>? refuseUndesignable = null)
     {
         var (outcome, issues, events) = await DesignRunner.DesignAndStageAsync(db, truss, Caller, Clock, cancellationToken).ConfigureAwait(false);
+        if (outcome is null && refuseUndesignable is not null)
+        {
+            // nothing is saved: the caller's context is dropped with its staged changes
+            return (refuseUndesignable(issues), issues, null);
+        }
+
         AuditWriter.AddChanges(db, Caller, Clock, truss.ProjectId, outcome?.TrussSnapshot.Fingerprint);
         if (auditAction is not null || outcome is not null)
         {
@@ -94,6 +101,30 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
 
         var canEdit = PermissionTable.Allows(AccessLevel.ProjectEdit, Caller.Roles, role);
         return ServiceResult<TrussDetail>.Ok(TrussViews.ToDetail(truss, snapshots, role, canEdit, messages.Select(m => m.ToString()).ToList()));
+    }
+
+    /// <summary>Attempts of one save when it loses races only on the truss's snapshot rows.</summary>
+    public const int SnapshotRaceAttempts = 8;
+
+    /// <summary>
+    /// Every save re-designs the whole truss and replaces its snapshots, so two users saving different rows of one
+    /// truss at once race on the snapshot rows only. Such a lost race is not the caller's conflict: the whole attempt
+    /// (fresh context, the caller's versions checked again) runs again after a short random pause. A conflict on a
+    /// row the caller edited, or one still unresolved after <see cref="SnapshotRaceAttempts"/>, is returned.
+    /// </summary>
+    public static async Task<ServiceResult<T>> RetrySnapshotRacesAsync<T>(Func<Task<ServiceResult<T>>> attempt, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(attempt);
+        for (var i = 1; ; i++)
+        {
+            var result = await attempt().ConfigureAwait(false);
+            if (result.Kind != ResultKind.Conflict || i >= SnapshotRaceAttempts || result.Conflicts.Any(c => c.EntityType != nameof(DesignSnapshot)))
+            {
+                return result;
+            }
+
+            await Task.Delay(Random.Shared.Next(5, 40 * i), cancellationToken).ConfigureAwait(false);
+        }
     }
 
     /// <summary>Sets the version EF compares on save to the one the caller loaded.</summary>

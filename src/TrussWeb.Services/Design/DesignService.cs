@@ -180,9 +180,14 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
         return ServiceResult<Done>.Ok(default);
     }
 
-    public async Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken = default)
+    public Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(input);
+        return TrussUnitOfWork.RetrySnapshotRacesAsync(() => UpdateMemberDesignOnceAsync(trussId, memberId, input, cancellationToken), cancellationToken);
+    }
+
+    private async Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignOnceAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken)
+    {
         await using var db = await work.CreateAsync(cancellationToken).ConfigureAwait(false);
         var (truss, refusal, _) = await work.LoadAsync<MemberDesignDetail>(db, trussId, Op(nameof(UpdateMemberDesignAsync)), cancellationToken).ConfigureAwait(false);
         if (refusal is not null)
@@ -198,14 +203,15 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
 
         var o = input.Overrides;
         var errors = new List<FieldError>();
-        PositiveOrNull(errors, nameof(o.Kx), o.Kx, "");
-        PositiveOrNull(errors, nameof(o.Ky), o.Ky, "");
-        PositiveOrNull(errors, nameof(o.Kz), o.Kz, "");
-        PositiveOrNull(errors, nameof(o.LengthXMm), o.LengthXMm, " mm");
-        PositiveOrNull(errors, nameof(o.LengthYMm), o.LengthYMm, " mm");
-        PositiveOrNull(errors, nameof(o.LengthZMm), o.LengthZMm, " mm");
-        PositiveOrNull(errors, nameof(o.KLuMm), o.KLuMm, " mm");
-        PositiveOrNull(errors, nameof(o.KLvMm), o.KLvMm, " mm");
+        // Core's plausible limits (Validation/PlausibleRange), checked here so a refused value is never saved.
+        InRangeOrNull(errors, nameof(o.Kx), o.Kx, PlausibleRange.MinK, PlausibleRange.MaxK, "");
+        InRangeOrNull(errors, nameof(o.Ky), o.Ky, PlausibleRange.MinK, PlausibleRange.MaxK, "");
+        InRangeOrNull(errors, nameof(o.Kz), o.Kz, PlausibleRange.MinK, PlausibleRange.MaxK, "");
+        InRangeOrNull(errors, nameof(o.LengthXMm), o.LengthXMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
+        InRangeOrNull(errors, nameof(o.LengthYMm), o.LengthYMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
+        InRangeOrNull(errors, nameof(o.LengthZMm), o.LengthZMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
+        InRangeOrNull(errors, nameof(o.KLuMm), o.KLuMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
+        InRangeOrNull(errors, nameof(o.KLvMm), o.KLvMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
         PositiveOrNull(errors, nameof(o.ConnectorSpacingMm), o.ConnectorSpacingMm, " mm");
         if (o.ConnectorCount is < 0)
         {
@@ -238,7 +244,10 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
             return ServiceResult<MemberDesignDetail>.Invalid(nameof(o.SectionOverride), sectionIssue.Message);
         }
 
-        var (failure, designIssues, outcome) = await work.CommitAsync<MemberDesignDetail>(db, truss, null, cancellationToken).ConfigureAwait(false);
+        // A truss that had a design and cannot be designed with this edit keeps its stored inputs: the edit is refused, not saved.
+        var hadDesign = await db.DesignSnapshots.AnyAsync(s => s.TrussId == trussId, cancellationToken).ConfigureAwait(false);
+        var (failure, designIssues, outcome) = await work.CommitAsync<MemberDesignDetail>(db, truss, null, cancellationToken,
+            refuseUndesignable: hadDesign ? issues => ServiceResult<MemberDesignDetail>.Invalid(issues.Select(ToOverrideError).ToList()) : null).ConfigureAwait(false);
         if (failure is not null)
         {
             return failure;
@@ -246,7 +255,7 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
 
         if (outcome is null)
         {
-            return ServiceResult<MemberDesignDetail>.Invalid(designIssues.Select(i => new FieldError(i.Field, i.Message)).ToList());
+            return ServiceResult<MemberDesignDetail>.Invalid(designIssues.Select(ToOverrideError).ToList());
         }
 
         await using var read = await work.CreateAsync(cancellationToken).ConfigureAwait(false);
@@ -272,6 +281,26 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
 
         return ServiceResult<TrussDesignView>.Ok(DesignViews.Truss(trussId, snapshots, members, messages));
     }
+
+    private static void InRangeOrNull(List<FieldError> errors, string field, double? value, double min, double max, string unit)
+    {
+        if (value is { } v && !(v >= min && v <= max))
+        {
+            var inv = System.Globalization.CultureInfo.InvariantCulture;
+            errors.Add(new FieldError(field,
+                $"must be from {min.ToString(inv)}{unit} to {max.ToString(inv)}{unit}, or left empty for the default (got {v.ToString(inv)}{unit})"));
+        }
+    }
+
+    /// <summary>Core's names of a member's design inputs as the fields of <see cref="MemberOverrides"/>.</summary>
+    private static FieldError ToOverrideError(ValidationIssue issue) => new(issue.Field switch
+    {
+        "KLu" => nameof(MemberOverrides.KLuMm),
+        "KLv" => nameof(MemberOverrides.KLvMm),
+        "Connectors.Spacing" => nameof(MemberOverrides.ConnectorSpacingMm),
+        "Connectors.Count" => nameof(MemberOverrides.ConnectorCount),
+        var other => other,
+    }, issue.Message);
 
     private static void PositiveOrNull(List<FieldError> errors, string field, double? value, string unit)
     {

@@ -536,8 +536,12 @@ internal sealed class TrussService(TrussUnitOfWork work) : ITrussService
     };
 
     /// <summary>Load, authorize, apply the edit (collecting field errors), then re-design and save; nothing is saved when there are errors.</summary>
-    private async Task<ServiceResult<TrussDetail>> EditAsync(Guid trussId, string method, CancellationToken cancellationToken,
-        Action<TrussWebDbContext, Truss, List<FieldError>> edit, bool sectionCheck = false, string? auditAction = null)
+    private Task<ServiceResult<TrussDetail>> EditAsync(Guid trussId, string method, CancellationToken cancellationToken,
+        Action<TrussWebDbContext, Truss, List<FieldError>> edit, bool sectionCheck = false, string? auditAction = null) =>
+        TrussUnitOfWork.RetrySnapshotRacesAsync(() => EditOnceAsync(trussId, method, cancellationToken, edit, sectionCheck, auditAction), cancellationToken);
+
+    private async Task<ServiceResult<TrussDetail>> EditOnceAsync(Guid trussId, string method, CancellationToken cancellationToken,
+        Action<TrussWebDbContext, Truss, List<FieldError>> edit, bool sectionCheck, string? auditAction)
     {
         await using var db = await work.CreateAsync(cancellationToken).ConfigureAwait(false);
         var (truss, refusal, role) = await work.LoadAsync<TrussDetail>(db, trussId, Op(method), cancellationToken).ConfigureAwait(false);

@@ -28,3 +28,26 @@ public static class Pages
         await page.WaitForFunctionAsync("() => !document.querySelector('.mud-progress-linear-indeterminate, [data-testid$=\"-loading\"]')");
     }
 }
+
+/// <summary>Form helpers for MudBlazor inputs (the data-testid lands on the input or on its wrapper).</summary>
+public static class Inputs
+{
+    public static ILocator Field(IPage page, string testId) =>
+        page.Locator($"input[data-testid={testId}], [data-testid={testId}] input, textarea[data-testid={testId}]").First;
+
+    public static async Task FillAsync(IPage page, string testId, string value)
+    {
+        var field = Field(page, testId);
+        await field.FillAsync(value);
+        await field.BlurAsync();
+    }
+
+    /// <summary>Opens a MudSelect by its data-testid and picks the item whose text contains <paramref name="text"/>.</summary>
+    public static async Task PickAsync(IPage page, string testId, string text)
+    {
+        await page.Locator($"[data-testid={testId}]").First.ClickAsync();
+        var item = page.Locator(".mud-popover-open .mud-list-item", new PageLocatorOptions { HasText = text }).First;
+        await item.ClickAsync();
+        await page.WaitForFunctionAsync("() => !document.querySelector('.mud-popover-open .mud-list-item')");
+    }
+}
