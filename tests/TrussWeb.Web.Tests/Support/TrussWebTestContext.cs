@@ -13,7 +13,12 @@ public abstract class TrussWebTestContext : BunitContext, IAsyncLifetime
         Services.AddSingleton(TestData.Catalogue);
         Services.AddSingleton<TrussWeb.Services.Contracts.IReviewService>(Reviews);
         Services.AddSingleton<TrussWeb.Services.Contracts.IReviewEvents>(ReviewHub);
+        Services.AddSingleton<TrussWeb.Services.Contracts.IExportService>(Exports);
+        Services.AddSingleton<TrussWeb.Services.Contracts.IExportEvents>(Exports);
     }
+
+    /// <summary>The export service every page gets (the project page embeds the export area).</summary>
+    protected Fakes.FakeExportService Exports { get; } = new();
 
     /// <summary>The review service every page and panel gets (pages embed review panels); tests set its reviews.</summary>
     protected Fakes.FakeReviewService Reviews { get; } = new();
