@@ -74,6 +74,9 @@ public sealed class AuthorizationTableTests
         ["IReviewService.ExportAuditCsvAsync"] = [Admin, Lead, Designer, Checker],
         ["IReviewService.GetIssueStatusAsync"] = [Admin, Lead, Designer, Checker],
         ["IReviewService.IssueFinalSetAsync"] = [Admin, Lead],
+        ["IApiTokenService.ListMyTokensAsync"] = [Admin, Lead, Designer, Checker, Outsider],
+        ["IApiTokenService.CreateAsync"] = [Admin, Lead, Designer, Checker, Outsider],
+        ["IApiTokenService.RevokeAsync"] = [Admin, Lead, Designer, Checker, Outsider],
     };
 
     public static IEnumerable<string> InterfaceMethods() =>
@@ -86,7 +89,7 @@ public sealed class AuthorizationTableTests
     public void Every_service_interface_method_has_a_permission_entry_and_an_expected_row()
     {
         var methods = InterfaceMethods().ToList();
-        Assert.Equal(6, methods.Select(m => m.Split('.')[0]).Distinct().Count());
+        Assert.Equal(7, methods.Select(m => m.Split('.')[0]).Distinct().Count());
         Assert.Empty(methods.Except(PermissionTable.Methods.Keys));
         Assert.Empty(methods.Except(Expected.Keys));
         Assert.Empty(PermissionTable.Methods.Keys.Except(methods));

@@ -70,6 +70,10 @@ public static class PermissionTable
         [Key<IReviewService>(nameof(IReviewService.ExportAuditCsvAsync))] = AccessLevel.ProjectRead,
         [Key<IReviewService>(nameof(IReviewService.GetIssueStatusAsync))] = AccessLevel.ProjectRead,
         [Key<IReviewService>(nameof(IReviewService.IssueFinalSetAsync))] = AccessLevel.ProjectManage,
+
+        [Key<IApiTokenService>(nameof(IApiTokenService.ListMyTokensAsync))] = AccessLevel.SignedIn,
+        [Key<IApiTokenService>(nameof(IApiTokenService.CreateAsync))] = AccessLevel.SignedIn,
+        [Key<IApiTokenService>(nameof(IApiTokenService.RevokeAsync))] = AccessLevel.SignedIn,
     };
 
     public static string Key<TService>(string method) => $"{typeof(TService).Name}.{method}";

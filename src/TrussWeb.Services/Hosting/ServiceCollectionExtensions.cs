@@ -13,6 +13,7 @@ using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Design;
 using TrussWeb.Services.Projects;
 using TrussWeb.Services.Review;
+using TrussWeb.Services.Tokens;
 using TrussWeb.Services.Trusses;
 using TrussWeb.Services.Users;
 
@@ -49,6 +50,8 @@ public static class ServiceCollectionExtensions
         services.AddScoped<ICatalogueService, CatalogueService>();
         services.AddScoped<IUserAdminService, UserAdminService>();
         services.AddScoped<IReviewService, ReviewService>();
+        services.AddScoped<IApiTokenService, ApiTokenService>();
+        services.AddScoped<ApiTokenAuthenticator>();
         services.TryAddSingleton<IReviewEvents, ReviewEvents>();
 
         services.AddDataProtection().SetApplicationName("TrussWeb").PersistKeysToDbContext<TrussWebDbContext>();
