@@ -130,8 +130,7 @@ public static class AdminCommands
 
         var roles = await users.GetRolesAsync(user).ConfigureAwait(false);
         var caller = new FixedCaller(user.Id, user.DisplayName, [.. roles]);
-        var factory = scope1.ServiceProvider.GetRequiredService<Microsoft.EntityFrameworkCore.IDbContextFactory<TrussWebDbContext>>();
-        var service = new ApiTokenService(factory, new Authorization.Authorizer(caller), clock);
+        var service = ServiceCollectionExtensions.TokenServiceFor(scope1.ServiceProvider, caller);
         var created = await service.CreateAsync(input, cancellationToken).ConfigureAwait(false);
         if (!created.IsOk)
         {

@@ -94,6 +94,13 @@ public static class ServiceCollectionExtensions
             new UserAdminService(scope.GetRequiredService<UserManager<AppUser>>(), factory, authorizer, clock),
             new ReviewService(factory, authorizer, clock, events));
     }
+
+    /// <summary>The access-token service acting as <paramref name="caller"/> (command line, tests).</summary>
+    public static IApiTokenService TokenServiceFor(IServiceProvider scope, ICallerContext caller)
+    {
+        ArgumentNullException.ThrowIfNull(scope);
+        return new ApiTokenService(scope.GetRequiredService<IDbContextFactory<TrussWebDbContext>>(), new Authorizer(caller), scope.GetRequiredService<TimeProvider>());
+    }
 }
 
 /// <summary>The service interfaces bound to one caller.</summary>
