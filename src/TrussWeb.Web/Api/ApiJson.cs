@@ -23,6 +23,23 @@ public static partial class ApiJson
         options.UnmappedMemberHandling = JsonUnmappedMemberHandling.Disallow;
         options.MaxDepth = 32;
         options.Converters.Add(new JsonStringEnumConverter(allowIntegerValues: false));
+        // A nullable constructor parameter (string? Client) may be left out; a non-nullable one is required.
+        options.TypeInfoResolver = new System.Text.Json.Serialization.Metadata.DefaultJsonTypeInfoResolver
+        {
+            Modifiers =
+            {
+                info =>
+                {
+                    foreach (var property in info.Properties)
+                    {
+                        if (property.IsRequired && property.AssociatedParameter is { IsNullable: true })
+                        {
+                            property.IsRequired = false;
+                        }
+                    }
+                },
+            },
+        };
     }
 
     /// <summary>The body as <typeparamref name="T"/>, or the 400/413/415 problem to return.</summary>
@@ -62,6 +79,13 @@ public static partial class ApiJson
             return (null, ApiProblems.BadRequest("The request body is empty; send a JSON object.", [new ApiFieldError("$", "a JSON object is required")]));
         }
 
+        if (LargestNumber(buffer.GetBuffer().AsSpan(0, (int)buffer.Length)) is { } huge)
+        {
+            var limitText = MaxMagnitude.ToString("0e0", CultureInfo.InvariantCulture);
+            return (null, ApiProblems.BadRequest($"{huge.Path} is {huge.Text}, beyond the largest magnitude any input may have ({limitText}).",
+                [new ApiFieldError(huge.Path, $"must be at most {limitText} in magnitude", huge.Text, limitText)]));
+        }
+
         try
         {
             var value = JsonSerializer.Deserialize<T>(buffer.GetBuffer().AsSpan(0, (int)buffer.Length), json);
@@ -72,6 +96,72 @@ public static partial class ApiJson
         catch (JsonException ex)
         {
             return (null, FromJsonException<T>(ex));
+        }
+    }
+
+    /// <summary>
+    /// Largest magnitude of any number in a request: Core's largest outer limit (forces, 1e10 N). Each
+    /// field's own limit is checked later; this stops 1e308 and beyond before any arithmetic.
+    /// </summary>
+    public const double MaxMagnitude = TrussWeb.Core.Validation.PlausibleRange.MaxForceN;
+
+    /// <summary>The first number (with its JSON path) beyond <see cref="MaxMagnitude"/> or beyond the double range; null when none. Invalid JSON is left to the serializer.</summary>
+    public static (string Path, string Text)? LargestNumber(ReadOnlySpan<byte> json)
+    {
+        var reader = new Utf8JsonReader(json, new JsonReaderOptions { MaxDepth = 64 });
+        var path = new List<string>();
+        var indexes = new List<int>();
+        string? property = null;
+        try
+        {
+            while (reader.Read())
+            {
+                switch (reader.TokenType)
+                {
+                    case JsonTokenType.PropertyName:
+                        property = reader.GetString();
+                        break;
+                    case JsonTokenType.StartObject or JsonTokenType.StartArray:
+                        path.Add(Segment(path.Count == 0 ? null : property, indexes));
+                        indexes.Add(reader.TokenType == JsonTokenType.StartArray ? 0 : -1);
+                        property = null;
+                        break;
+                    case JsonTokenType.EndObject or JsonTokenType.EndArray:
+                        path.RemoveAt(path.Count - 1);
+                        indexes.RemoveAt(indexes.Count - 1);
+                        Advance(indexes);
+                        break;
+                    case JsonTokenType.Number:
+                        if (!reader.TryGetDouble(out var v) || !double.IsFinite(v) || Math.Abs(v) > MaxMagnitude)
+                        {
+                            var text = System.Text.Encoding.UTF8.GetString(reader.ValueSpan);
+                            return (string.Concat(path) + Segment(property, indexes), text);
+                        }
+
+                        Advance(indexes);
+                        break;
+                    default:
+                        Advance(indexes);
+                        break;
+                }
+            }
+        }
+        catch (JsonException)
+        {
+            return null;
+        }
+
+        return null;
+
+        static string Segment(string? name, List<int> indexes) =>
+            indexes.Count == 0 ? "$" : indexes[^1] >= 0 ? string.Create(CultureInfo.InvariantCulture, $"[{indexes[^1]}]") : name is null ? string.Empty : "." + name;
+
+        static void Advance(List<int> indexes)
+        {
+            if (indexes.Count > 0 && indexes[^1] >= 0)
+            {
+                indexes[^1]++;
+            }
         }
     }
 

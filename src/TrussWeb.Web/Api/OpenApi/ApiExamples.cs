@@ -35,7 +35,7 @@ public static class ApiExamples
               "revision": "B", "standardCode": "SANS 10162-1", "defaultGradeName": "S355JR" }, "version": 1 }
             """,
         ["CreateTruss"] = """
-            { "name": "RT2", "type": "Howe", "spanMm": 12000, "pitchDegrees": 15, "apexHeightMm": null, "heelDepthMm": 300,
+            { "name": "RT2", "type": "PitchedHowe", "spanMm": 12000, "pitchDegrees": 15, "apexHeightMm": null, "heelDepthMm": 300,
               "panelCount": 8, "spacingMm": 6000, "bottomRestraintEvery": 2 }
             """,
         ["SaveTrussSettings"] = """
