@@ -143,11 +143,17 @@ public sealed class SqliteCrudContractTests(SqliteApp app) : CrudContractTests, 
 }
 
 [Collection(PostgresCollection.Name)]
-public sealed class PostgresCrudContractTests(PostgresClusterFixture cluster) : CrudContractTests, IAsyncLifetime
+public sealed class PostgresCrudContractTests(PostgresApp app) : CrudContractTests, IClassFixture<PostgresApp>
+{
+    protected override ApiAppFactory App => app.App;
+}
+
+/// <summary>One app over a fresh PostgreSQL database for the test class.</summary>
+public sealed class PostgresApp(PostgresClusterFixture cluster) : IAsyncLifetime
 {
     private ApiAppFactory? _app;
 
-    protected override ApiAppFactory App => _app!;
+    public ApiAppFactory App => _app!;
 
     public async Task InitializeAsync() => _app = new ApiAppFactory(await PostgresTestDatabase.CreateAsync(cluster.AdminConnectionString));
 

@@ -92,7 +92,6 @@ public static class ApiExtensions
         ProjectEndpoints.Map(v1);
         TrussEndpoints.Map(v1);
         ReviewEndpoints.Map(v1);
-        v1.MapFallback("{*path}", () => ApiProblems.NotFound("No API route matches this path and method; see /openapi/v1.json.")).ExcludeFromDescription();
         return app;
     }
 
@@ -140,11 +139,14 @@ public static class ApiExtensions
             var detail = status switch
             {
                 400 => "The request could not be read (a route, query or header value has the wrong form, e.g. a number that is not a number).",
-                404 => "Not found.",
+                404 => "No API route matches this path; see /openapi/v1.json.",
                 405 => "This method is not allowed on this path.",
+                415 => "Send the body as application/json.",
                 _ => "The request failed.",
             };
-            await ApiProblems.Problem(status, "The request failed.", detail).ExecuteAsync(context).ConfigureAwait(false);
+            await ApiProblems.Problem(status, "The request failed.", detail,
+                status == StatusCodes.Status415UnsupportedMediaType ? [new ApiFieldError("Content-Type", "must be application/json", context.Request.ContentType, "application/json")] : null)
+                .ExecuteAsync(context).ConfigureAwait(false);
         }
     }
 
