@@ -69,7 +69,7 @@ public static class ApiExamples
         ["SubmitMember"] = """{ "checkerUserId": "<checker user id from /projects/{id}/people>", "note": "Ready for check" }""",
         ["SubmitTruss"] = """{ "checkerUserId": "<checker user id from /projects/{id}/people>", "note": "Whole truss ready" }""",
         ["ResubmitMember"] = """{ "answer": "Connector spacing reduced to 600 mm" }""",
-        ["WithdrawMember"] = """{}""",
+        ["WithdrawMember"] = """{ "comment": "Taking it back to change the section" }""",
         ["ApproveMember"] = """{ "comment": "Checked against the record" }""",
         ["ReturnMember"] = """{ "comment": "Please check the out-of-plane length" }""",
         ["ReassignChecker"] = """{ "checkerUserId": "<user id of another checker>" }""",
