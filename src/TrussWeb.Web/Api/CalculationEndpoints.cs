@@ -280,7 +280,7 @@ public static class CalculationEndpoints
                 return null;
             }
 
-            var grades = await catalogue.ListGradesAsync(ct);
+            var grades = await GradesAsync(catalogue, ct);
             var grade = grades.Value?.FirstOrDefault(g => string.Equals(g.Name, name.Trim(), StringComparison.OrdinalIgnoreCase));
             if (grade is null)
             {
@@ -325,6 +325,29 @@ public static class CalculationEndpoints
         }
 
         return material;
+    }
+
+    /// <summary>How long the grade list is reused by stateless checks (grades change only by an administrator's edit).</summary>
+    public static readonly TimeSpan GradeCacheLifetime = TimeSpan.FromSeconds(30);
+
+    private static (DateTime Until, ServiceResult<IReadOnlyList<GradeView>> Grades)? _grades;
+
+    /// <summary>The grades through the catalogue service (so the caller is authorized), reused for <see cref="GradeCacheLifetime"/>.</summary>
+    private static async Task<ServiceResult<IReadOnlyList<GradeView>>> GradesAsync(ICatalogueService catalogue, CancellationToken ct)
+    {
+        var cached = _grades;
+        if (cached is { } c && c.Until > DateTime.UtcNow)
+        {
+            return c.Grades;
+        }
+
+        var fresh = await catalogue.ListGradesAsync(ct);
+        if (fresh.IsOk)
+        {
+            _grades = (DateTime.UtcNow + GradeCacheLifetime, fresh);
+        }
+
+        return fresh;
     }
 
     private static async Task<IResult> AnalyseAsync(HttpRequest request)
