@@ -13,12 +13,17 @@ namespace TrussWeb.Web.Api;
 /// </summary>
 public static partial class ApiJson
 {
-    /// <summary>The API's serializer settings (also used for responses and the OpenAPI schemas).</summary>
+    private static JsonSerializerOptions? _reading;
+
+    /// <summary>
+    /// The API's serializer settings (responses and the OpenAPI schemas). Request bodies are read with a
+    /// copy that also refuses null for non-nullable properties (<see cref="ReadingOptions"/>); responses
+    /// do not use that check, so a service value can never turn a good answer into a serializer error.
+    /// </summary>
     public static void Configure(JsonSerializerOptions options)
     {
         ArgumentNullException.ThrowIfNull(options);
         options.NumberHandling = JsonNumberHandling.Strict;
-        options.RespectNullableAnnotations = true;
         options.RespectRequiredConstructorParameters = true;
         options.UnmappedMemberHandling = JsonUnmappedMemberHandling.Disallow;
         options.MaxDepth = 32;
@@ -48,7 +53,7 @@ public static partial class ApiJson
     {
         ArgumentNullException.ThrowIfNull(request);
         var limit = request.HttpContext.RequestServices.GetRequiredService<IOptions<ApiOptions>>().Value.MaxBodyBytes;
-        var json = request.HttpContext.RequestServices.GetRequiredService<IOptions<Microsoft.AspNetCore.Http.Json.JsonOptions>>().Value.SerializerOptions;
+        var json = ReadingOptions(request.HttpContext.RequestServices.GetRequiredService<IOptions<Microsoft.AspNetCore.Http.Json.JsonOptions>>().Value.SerializerOptions);
         if (request.ContentType is not { } type || !type.StartsWith("application/json", StringComparison.OrdinalIgnoreCase))
         {
             return (null, ApiProblems.Problem(StatusCodes.Status415UnsupportedMediaType, "The body must be JSON.",
@@ -163,6 +168,13 @@ public static partial class ApiJson
                 indexes[^1]++;
             }
         }
+    }
+
+    /// <summary>The response settings plus <c>RespectNullableAnnotations</c> (null refused for non-nullable properties), made once.</summary>
+    public static JsonSerializerOptions ReadingOptions(JsonSerializerOptions http)
+    {
+        ArgumentNullException.ThrowIfNull(http);
+        return _reading ??= new JsonSerializerOptions(http) { RespectNullableAnnotations = true };
     }
 
     private static IResult TooLarge(int limit, long? length)
