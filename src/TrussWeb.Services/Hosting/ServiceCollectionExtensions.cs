@@ -52,6 +52,7 @@ public static class ServiceCollectionExtensions
         services.AddScoped<IReviewService, ReviewService>();
         services.AddScoped<IApiTokenService, ApiTokenService>();
         services.AddScoped<ApiTokenAuthenticator>();
+        services.TryAddSingleton<ApiTokenCache>();
         services.TryAddSingleton<IReviewEvents, ReviewEvents>();
 
         services.AddDataProtection().SetApplicationName("TrussWeb").PersistKeysToDbContext<TrussWebDbContext>();
@@ -99,7 +100,8 @@ public static class ServiceCollectionExtensions
     public static IApiTokenService TokenServiceFor(IServiceProvider scope, ICallerContext caller)
     {
         ArgumentNullException.ThrowIfNull(scope);
-        return new ApiTokenService(scope.GetRequiredService<IDbContextFactory<TrussWebDbContext>>(), new Authorizer(caller), scope.GetRequiredService<TimeProvider>());
+        return new ApiTokenService(scope.GetRequiredService<IDbContextFactory<TrussWebDbContext>>(), new Authorizer(caller), scope.GetRequiredService<TimeProvider>(),
+            scope.GetService<ApiTokenCache>() ?? new ApiTokenCache());
     }
 }
 

@@ -19,7 +19,7 @@ public sealed record ApiTokenCheck(ApiTokenIdentity? Identity, string? Failure)
 /// SHA-256 compared in constant time), not revoked, not expired, owner not locked out. Records the last
 /// use at most once a minute so a busy client does not write on every request.
 /// </summary>
-public sealed class ApiTokenAuthenticator(IDbContextFactory<TrussWebDbContext> factory, TimeProvider clock)
+public sealed class ApiTokenAuthenticator(IDbContextFactory<TrussWebDbContext> factory, TimeProvider clock, ApiTokenCache cache)
 {
     /// <summary>Shortest interval between two writes of <c>LastUsedUtc</c>.</summary>
     public static readonly TimeSpan LastUsedResolution = TimeSpan.FromMinutes(1);
@@ -30,6 +30,12 @@ public sealed class ApiTokenAuthenticator(IDbContextFactory<TrussWebDbContext> f
         if (prefix is null)
         {
             return new ApiTokenCheck(null, "The bearer token is not a TrussWeb access token.");
+        }
+
+        var hashKey = ApiTokenText.Hash(token!);
+        if (cache.TryGet(hashKey, clock.GetUtcNow().UtcDateTime, out var known))
+        {
+            return new ApiTokenCheck(known, null);
         }
 
         await using var db = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
@@ -70,6 +76,8 @@ public sealed class ApiTokenAuthenticator(IDbContextFactory<TrussWebDbContext> f
         }
 
         var name = string.IsNullOrWhiteSpace(row.User.DisplayName) ? row.User.Email ?? row.UserId : row.User.DisplayName;
-        return new ApiTokenCheck(new ApiTokenIdentity(row.Id, prefix, row.UserId, name, roles, row.Scope), null);
+        var identity = new ApiTokenIdentity(row.Id, prefix, row.UserId, name, roles, row.Scope);
+        cache.Set(hashKey, identity, row.ExpiresUtc, now);
+        return new ApiTokenCheck(identity, null);
     }
 }

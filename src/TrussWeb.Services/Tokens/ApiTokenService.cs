@@ -9,7 +9,7 @@ using TrussWeb.Services.Contracts;
 namespace TrussWeb.Services.Tokens;
 
 /// <summary>The caller's personal access tokens. Creation and revocation are written to the audit log (never the token text).</summary>
-internal sealed class ApiTokenService(IDbContextFactory<TrussWebDbContext> factory, Authorizer authorizer, TimeProvider clock) : IApiTokenService
+internal sealed class ApiTokenService(IDbContextFactory<TrussWebDbContext> factory, Authorizer authorizer, TimeProvider clock, ApiTokenCache cache) : IApiTokenService
 {
     /// <summary>Longest lifetime of a token.</summary>
     public static readonly TimeSpan MaxLifetime = TimeSpan.FromDays(366);
@@ -84,6 +84,7 @@ internal sealed class ApiTokenService(IDbContextFactory<TrussWebDbContext> facto
             return ServiceResult<ApiTokenView>.Conflict(await Conflicts.DescribeAsync(db, ex, cancellationToken).ConfigureAwait(false));
         }
 
+        cache.Forget(row.Id);
         return ServiceResult<ApiTokenView>.Ok(View(row));
     }
 
