@@ -56,6 +56,8 @@ public class TrussWebDbContext : IdentityDbContext<AppUser, IdentityRole, string
 
     public DbSet<AuditEntry> AuditEntries => Set<AuditEntry>();
 
+    public DbSet<ApiToken> ApiTokens => Set<ApiToken>();
+
     /// <inheritdoc />
     public DbSet<DataProtectionKey> DataProtectionKeys => Set<DataProtectionKey>();
 

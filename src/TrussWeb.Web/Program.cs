@@ -4,6 +4,7 @@ using Microsoft.AspNetCore.Identity;
 using Microsoft.EntityFrameworkCore;
 using MudBlazor.Services;
 using TrussWeb.Web;
+using TrussWeb.Web.Api;
 using TrussWeb.Data;
 using TrussWeb.Data.Entities;
 using TrussWeb.Services.Contracts;
@@ -53,6 +54,7 @@ builder.Services.ConfigureApplicationCookie(options =>
 builder.Services.AddAuthorization();
 builder.Services.AddCascadingAuthenticationState();
 builder.AddTrussWebDeployment();
+builder.AddTrussWebApi();
 
 var app = builder.Build();
 
@@ -75,6 +77,7 @@ app.UseStatusCodePagesWithReExecute("/not-found", createScopeForStatusCodePages:
 app.UseAuthentication();
 app.UseAuthorization();
 app.UseAntiforgery();
+app.MapTrussWebApi();
 
 app.MapStaticAssets();
 app.MapSignOut();

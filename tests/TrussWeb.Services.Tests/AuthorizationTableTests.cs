@@ -82,6 +82,9 @@ public sealed class AuthorizationTableTests
         ["IExportService.ListJobsAsync"] = [Admin, Lead, Designer, Checker],
         ["IExportService.OpenFileAsync"] = [Admin, Lead, Designer, Checker],
         ["IExportService.CancelAsync"] = [Admin, Lead, Designer, Checker],
+        ["IApiTokenService.ListMyTokensAsync"] = [Admin, Lead, Designer, Checker, Outsider],
+        ["IApiTokenService.CreateAsync"] = [Admin, Lead, Designer, Checker, Outsider],
+        ["IApiTokenService.RevokeAsync"] = [Admin, Lead, Designer, Checker, Outsider],
     };
 
     public static IEnumerable<string> InterfaceMethods() =>
@@ -94,7 +97,7 @@ public sealed class AuthorizationTableTests
     public void Every_service_interface_method_has_a_permission_entry_and_an_expected_row()
     {
         var methods = InterfaceMethods().ToList();
-        Assert.Equal(7, methods.Select(m => m.Split('.')[0]).Distinct().Count());
+        Assert.Equal(8, methods.Select(m => m.Split('.')[0]).Distinct().Count());
         Assert.Empty(methods.Except(PermissionTable.Methods.Keys));
         Assert.Empty(methods.Except(Expected.Keys));
         Assert.Empty(PermissionTable.Methods.Keys.Except(methods));

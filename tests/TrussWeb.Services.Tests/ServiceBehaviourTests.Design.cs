@@ -34,6 +34,18 @@ public abstract partial class ServiceBehaviourTests
     }
 
     [Fact]
+    public async Task Truss_spacing_beyond_the_outer_length_limit_is_refused_naming_the_limit_and_nothing_is_saved()
+    {
+        var (_, truss) = await ProjectWithTrussAsync();
+        var result = await As(Designer).Trusses.SaveSettingsAsync(truss.Id,
+            new TrussSettingsInput(truss.Name, 1e308, null, truss.DeflectionLimitRatio, truss.ConnectionAllowanceFraction, truss.Notes, truss.Version));
+        Assert.Equal(ResultKind.Invalid, result.Kind);
+        // Source: TrussWeb.Core.Validation.PlausibleRange.MaxLengthMm (500 m), the outer limit of spans and spacings.
+        Assert.Contains(result.Errors, e => e.Field == nameof(TrussSettingsInput.SpacingMm) && e.Message.Contains("at most 500000 mm", StringComparison.Ordinal));
+        Assert.Equal(truss.SpacingMm, Ok(await As(Designer).Trusses.GetAsync(truss.Id)).SpacingMm);
+    }
+
+    [Fact]
     public async Task A_member_design_is_read_from_its_snapshot_with_the_calculation_record()
     {
         var (_, truss) = await ProjectWithTrussAsync();

@@ -78,6 +78,10 @@ public static class PermissionTable
         [Key<IExportService>(nameof(IExportService.ListJobsAsync))] = AccessLevel.ProjectRead,
         [Key<IExportService>(nameof(IExportService.OpenFileAsync))] = AccessLevel.ProjectRead,
         [Key<IExportService>(nameof(IExportService.CancelAsync))] = AccessLevel.ProjectRead,
+
+        [Key<IApiTokenService>(nameof(IApiTokenService.ListMyTokensAsync))] = AccessLevel.SignedIn,
+        [Key<IApiTokenService>(nameof(IApiTokenService.CreateAsync))] = AccessLevel.SignedIn,
+        [Key<IApiTokenService>(nameof(IApiTokenService.RevokeAsync))] = AccessLevel.SignedIn,
     };
 
     public static string Key<TService>(string method) => $"{typeof(TService).Name}.{method}";

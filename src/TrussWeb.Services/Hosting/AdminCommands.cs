@@ -4,6 +4,7 @@ using Microsoft.Extensions.DependencyInjection;
 using TrussWeb.Data;
 using TrussWeb.Data.Entities;
 using TrussWeb.Services.Contracts;
+using TrussWeb.Services.Tokens;
 using TrussWeb.Services.Users;
 
 namespace TrussWeb.Services.Hosting;
@@ -11,16 +12,17 @@ namespace TrussWeb.Services.Hosting;
 /// <summary>
 /// The administrator's command-line verbs of the web executable: <c>migrate</c>,
 /// <c>create-user &lt;email&gt; &lt;role&gt; [--password P]</c>, <c>reset-password &lt;email&gt; [--password P]</c>,
-/// <c>backup &lt;file&gt;</c>, <c>restore &lt;file&gt;</c>. Each returns the process exit code (0 ok, 1 failed).
+/// <c>backup &lt;file&gt;</c>, <c>restore &lt;file&gt;</c>,
+/// <c>create-token &lt;email&gt; &lt;name&gt; [--scope read|read-write] [--days N]</c> (prints the token once). Each returns the process exit code (0 ok, 1 failed).
 /// </summary>
 public static class AdminCommands
 {
-    public static IReadOnlyList<string> Verbs { get; } = ["migrate", "create-user", "reset-password", "backup", "restore"];
+    public static IReadOnlyList<string> Verbs { get; } = ["migrate", "create-user", "reset-password", "backup", "restore", "create-token"];
 
     public static bool IsVerb(string[] args) => args is { Length: > 0 } && Verbs.Contains(args[0], StringComparer.Ordinal);
 
     public static string Usage =>
-        "usage: TrussWeb.Web migrate | create-user <email> <role> [--password P] | reset-password <email> [--password P] | backup <file> | restore <file>";
+        "usage: TrussWeb.Web migrate | create-user <email> <role> [--password P] | reset-password <email> [--password P] | backup <file> | restore <file> | create-token <email> <name> [--scope read|read-write] [--days N]";
 
     public static async Task<int> RunAsync(string[] args, IServiceProvider services, TextWriter output, TextWriter error, CancellationToken cancellationToken = default)
     {
@@ -37,6 +39,7 @@ public static class AdminCommands
                 "reset-password" when args.Length >= 2 => await ResetPasswordAsync(services, args[1], Option(args, "--password"), output, error, cancellationToken).ConfigureAwait(false),
                 "backup" when args.Length >= 2 => await BackupAsync(services, args[1], output, error).ConfigureAwait(false),
                 "restore" when args.Length >= 2 => await RestoreAsync(services, args[1], output, error).ConfigureAwait(false),
+                "create-token" when args.Length >= 3 => await CreateTokenAsync(services, args[1], args[2], Option(args, "--scope"), Option(args, "--days"), output, error, cancellationToken).ConfigureAwait(false),
                 _ => await FailAsync(error, Usage).ConfigureAwait(false),
             };
         }
@@ -93,6 +96,50 @@ public static class AdminCommands
         await users.SetLockoutEndDateAsync(user, null).ConfigureAwait(false);
         await users.ResetAccessFailedCountAsync(user).ConfigureAwait(false);
         await output.WriteLineAsync(generated ? $"Password of {email} reset to the generated password {password}" : $"Password of {email} reset.").ConfigureAwait(false);
+        return 0;
+    }
+
+    /// <summary>Default lifetime of a token made on the command line, days.</summary>
+    public const int DefaultTokenDays = 90;
+
+    private static async Task<int> CreateTokenAsync(IServiceProvider services, string email, string name, string? scope, string? days, TextWriter output, TextWriter error,
+        CancellationToken cancellationToken)
+    {
+        await DatabaseMigrator.MigrateAsync(services, cancellationToken).ConfigureAwait(false);
+        await using var scope1 = services.CreateAsyncScope();
+        var users = scope1.ServiceProvider.GetRequiredService<UserManager<AppUser>>();
+        var user = await users.FindByEmailAsync(email).ConfigureAwait(false);
+        if (user is null)
+        {
+            return await FailAsync(error, $"create-token failed: no user with e-mail {email}").ConfigureAwait(false);
+        }
+
+        var lifetime = DefaultTokenDays;
+        if (days is not null && !int.TryParse(days, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out lifetime))
+        {
+            return await FailAsync(error, $"create-token failed: --days must be a whole number of days from 1 to {ApiTokenService.MaxLifetime.TotalDays} (got {days})").ConfigureAwait(false);
+        }
+
+        var clock = scope1.ServiceProvider.GetRequiredService<TimeProvider>();
+        var input = new ApiTokenInput(name, scope ?? ApiTokenScopes.ReadWrite, clock.GetUtcNow().UtcDateTime.AddDays(lifetime));
+        var errors = ApiTokenService.Validate(input, clock.GetUtcNow().UtcDateTime);
+        if (errors.Count > 0)
+        {
+            return await FailAsync(error, "create-token failed: " + string.Join("; ", errors)).ConfigureAwait(false);
+        }
+
+        var roles = await users.GetRolesAsync(user).ConfigureAwait(false);
+        var caller = new FixedCaller(user.Id, user.DisplayName, [.. roles]);
+        var service = ServiceCollectionExtensions.TokenServiceFor(scope1.ServiceProvider, caller);
+        var created = await service.CreateAsync(input, cancellationToken).ConfigureAwait(false);
+        if (!created.IsOk)
+        {
+            return await FailAsync(error, "create-token failed: " + created.Message).ConfigureAwait(false);
+        }
+
+        await output.WriteLineAsync($"Created token '{created.Value!.View.Name}' ({created.Value.View.Scope}, expires {created.Value.View.ExpiresUtc:yyyy-MM-dd HH:mm} UTC) for {email}. " +
+            "It is shown only now; store it safely:").ConfigureAwait(false);
+        await output.WriteLineAsync(created.Value.Token).ConfigureAwait(false);
         return 0;
     }
 

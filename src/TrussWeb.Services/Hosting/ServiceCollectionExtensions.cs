@@ -14,6 +14,7 @@ using TrussWeb.Services.Design;
 using TrussWeb.Services.Exports;
 using TrussWeb.Services.Projects;
 using TrussWeb.Services.Review;
+using TrussWeb.Services.Tokens;
 using TrussWeb.Services.Trusses;
 using TrussWeb.Services.Users;
 
@@ -50,6 +51,9 @@ public static class ServiceCollectionExtensions
         services.AddScoped<ICatalogueService, CatalogueService>();
         services.AddScoped<IUserAdminService, UserAdminService>();
         services.AddScoped<IReviewService, ReviewService>();
+        services.AddScoped<IApiTokenService, ApiTokenService>();
+        services.AddScoped<ApiTokenAuthenticator>();
+        services.TryAddSingleton<ApiTokenCache>();
         services.TryAddSingleton<IReviewEvents, ReviewEvents>();
         services.TryAddSingleton(_ => ExportOptions.From(configuration, configuration["contentRoot"] ?? Directory.GetCurrentDirectory()));
         services.TryAddSingleton<IExportRenderer, ReportRenderer>();
@@ -100,6 +104,14 @@ public static class ServiceCollectionExtensions
             scope.GetService<ExportJobRunner>() is { } runner
                 ? new ExportService(factory, authorizer, runner, new ReviewService(factory, authorizer, clock, events))
                 : null);
+    }
+
+    /// <summary>The access-token service acting as <paramref name="caller"/> (command line, tests).</summary>
+    public static IApiTokenService TokenServiceFor(IServiceProvider scope, ICallerContext caller)
+    {
+        ArgumentNullException.ThrowIfNull(scope);
+        return new ApiTokenService(scope.GetRequiredService<IDbContextFactory<TrussWebDbContext>>(), new Authorizer(caller), scope.GetRequiredService<TimeProvider>(),
+            scope.GetService<ApiTokenCache>() ?? new ApiTokenCache());
     }
 }
 

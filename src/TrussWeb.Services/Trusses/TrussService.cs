@@ -163,9 +163,11 @@ internal sealed class TrussService(TrussUnitOfWork work) : ITrussService
             }
 
             Positive(errors, nameof(input.SpacingMm), input.SpacingMm, "mm");
+            AtMost(errors, nameof(input.SpacingMm), input.SpacingMm, TrussWeb.Core.Validation.PlausibleRange.MaxLengthMm, "mm");
             if (input.PurlinSpacingMm is { } ps)
             {
                 Positive(errors, nameof(input.PurlinSpacingMm), ps, "mm");
+                AtMost(errors, nameof(input.PurlinSpacingMm), ps, TrussWeb.Core.Validation.PlausibleRange.MaxLengthMm, "mm");
             }
 
             Positive(errors, nameof(input.DeflectionLimitRatio), input.DeflectionLimitRatio, "");
@@ -652,6 +654,15 @@ internal sealed class TrussService(TrussUnitOfWork work) : ITrussService
         if (!(value > 0) || !double.IsFinite(value))
         {
             errors.Add(new FieldError(field, $"must be greater than 0{(unit.Length > 0 ? " " + unit : "")} (got {N(value)}{(unit.Length > 0 ? " " + unit : "")})"));
+        }
+    }
+
+    /// <summary>Refuses a finite value above Core's outer limit (e.g. 1e308 mm), naming the limit.</summary>
+    private static void AtMost(List<FieldError> errors, string field, double value, double max, string unit)
+    {
+        if (double.IsFinite(value) && value > max)
+        {
+            errors.Add(new FieldError(field, $"must be at most {N(max)} {unit} (got {N(value)} {unit})"));
         }
     }
 
