@@ -27,6 +27,10 @@ public sealed class RouteTableTests(SqliteApp app) : IClassFixture<SqliteApp>
         "/_framework/blazor.web.js",
         "/_framework/opaque-redirect",
         "/{**path:file}",
+        // Cookie-authorised downloads for the pages; their sign-in and access tests are in TrussWeb.Web.Tests
+        // (Http/ExportDownloadTests, Http/AuditCsvEndpointTests).
+        "/exports/{jobId:guid}/file",
+        "/projects/{projectId:guid}/audit.csv",
     };
 
     /// <summary>The @page routes of the app's components (pages have their own sign-in tests in TrussWeb.Web.Tests).</summary>
