@@ -218,6 +218,13 @@ public sealed partial class FullJourneyTests(DemoApp app, BrowserSession browser
         await designer.WaitForSelectorAsync(State("AwaitingCheck"));
         await shots.TakeAsync(designer, "designer-resubmitted");
 
+        // The project lead has the project open: the export area's approval line counts one member still to approve.
+        await lead.GotoAsync(journey.ProjectUrl);
+        await lead.WaitForSelectorAsync("[data-testid=export-approval]");
+        await Pages.SettleAsync(lead);
+        Assert.StartsWith($"{total - 1} of {total} members approved", (await lead.InnerTextAsync("[data-testid=export-approval]")).Trim(), StringComparison.Ordinal);
+        Assert.True(await lead.Locator("[data-testid=export-final]").IsDisabledAsync(), "no final set while a member is not approved");
+
         // The checker approves the resubmitted member from the queue.
         await checker.GotoAsync(app.Url("/checking"));
         var resubmitted = checker.Locator($"[data-testid=queue-row][data-truss='{TrussName}'][data-mark='{mark}']");
@@ -239,10 +246,9 @@ public sealed partial class FullJourneyTests(DemoApp app, BrowserSession browser
         await shots.TakeAsync(designer, "designer-sees-approved");
         designerProblems.AssertNone("designer's pages (second half)");
 
-        // The project lead: every member approved in the roll-up.
-        await lead.GotoAsync(journey.ProjectUrl);
-        await lead.WaitForSelectorAsync("[data-testid=rollup-total]");
-        await lead.WaitForSelectorAsync("[data-testid=export-approval]");
+        // The project lead's open page follows without a reload: every member approved in the roll-up and the export area.
+        await lead.Locator("[data-testid=export-approval]", new PageLocatorOptions { HasText = $"All {total} members approved" }).WaitForAsync();
+        await lead.Locator("[data-testid=rollup-total] [data-testid=count-Approved]", new PageLocatorOptions { HasText = total.ToString(System.Globalization.CultureInfo.InvariantCulture) }).WaitForAsync();
         await Pages.SettleAsync(lead);
         Assert.Equal(total.ToString(System.Globalization.CultureInfo.InvariantCulture), (await lead.InnerTextAsync("[data-testid=rollup-total] [data-testid=count-Approved]")).Trim());
         foreach (var other in new[] { "NotSubmitted", "AwaitingCheck", "Returned", "ApprovalStale" })
