@@ -49,8 +49,16 @@ public sealed class FakeExportService : IExportService, IExportEvents
         return new Remover(() => { lock (_handlers) { _handlers.Remove(entry); } });
     }
 
-    public Task<ServiceResult<ExportReadiness>> GetReadinessAsync(Guid projectId, CancellationToken cancellationToken = default) =>
-        Task.FromResult(ReadinessRefusal ?? ServiceResult<ExportReadiness>.Ok(Readiness));
+    /// <summary>How many times the approval state has been read.</summary>
+    public int ReadinessReads => Volatile.Read(ref _readinessReads);
+
+    private int _readinessReads;
+
+    public Task<ServiceResult<ExportReadiness>> GetReadinessAsync(Guid projectId, CancellationToken cancellationToken = default)
+    {
+        Interlocked.Increment(ref _readinessReads);
+        return Task.FromResult(ReadinessRefusal ?? ServiceResult<ExportReadiness>.Ok(Readiness));
+    }
 
     public Task<ServiceResult<ExportJobView>> StartAsync(Guid projectId, ExportKind kind, ExportFormat format, CancellationToken cancellationToken = default)
     {

@@ -16,7 +16,11 @@ public class ExportPanelTests : TrussWebTestContext
     {
         Services.AddSingleton<IExportService>(_exports);
         Services.AddSingleton<IExportEvents>(_exports);
+        _reviewEvents = new CountingReviewEvents(ReviewHub);
+        Services.AddSingleton<IReviewEvents>(_reviewEvents);
     }
+
+    private readonly CountingReviewEvents _reviewEvents;
 
     private IRenderedComponent<ExportPanel> RenderPanel() => Render<ExportPanel>(p => p.Add(x => x.ProjectId, Project));
 
@@ -108,5 +112,72 @@ public class ExportPanelTests : TrussWebTestContext
         Assert.Equal("The project does not exist or you are not a member of it.", cut.Find("[data-testid=export-load-error]").TextContent.Trim());
         Assert.Empty(cut.FindAll("[data-testid=export-book-pdf]"));
         Assert.Equal(0, _exports.Subscribers);
+    }
+
+    [Fact]
+    public async Task The_approval_line_follows_review_changes_of_its_project_until_the_panel_is_gone()
+    {
+        var cut = RenderPanel();
+        Assert.Contains("12 of 40", cut.Find("[data-testid=export-approval]").TextContent, StringComparison.Ordinal);
+        var reads = _exports.ReadinessReads;
+
+        // A change in another project is not this panel's business.
+        ReviewHub.Publish(Event(Guid.NewGuid()));
+        _exports.Readiness = new ExportReadiness(new IssueStatus(Project, 40, 13, 0, false, "13 of 40 members are approved; 27 are not."), false,
+            "Only the project lead can issue the final set.", "13 of 40 members approved — files will be marked preliminary (27 not approved)");
+        ReviewHub.Publish(Event(Project));
+
+        cut.WaitForAssertion(() => Assert.Equal("13 of 40 members approved — files will be marked preliminary (27 not approved)",
+            cut.Find("[data-testid=export-approval]").TextContent.Trim()));
+        Assert.Equal(reads + 1, _exports.ReadinessReads);
+
+        Assert.Equal(1, _reviewEvents.Subscribers);
+        await DisposeComponentsAsync();
+        Assert.Equal(0, _reviewEvents.Subscribers);
+    }
+
+    [Fact]
+    public void A_refused_caller_does_not_re_read_on_review_changes()
+    {
+        _exports.ReadinessRefusal = ServiceResult<ExportReadiness>.NotFound("The project does not exist or you are not a member of it.");
+        var cut = RenderPanel();
+        var reads = _exports.ReadinessReads;
+
+        ReviewHub.Publish(Event(Project));
+
+        Assert.Equal(0, _reviewEvents.Subscribers);
+        Assert.Equal(reads, _exports.ReadinessReads);
+        Assert.Single(cut.FindAll("[data-testid=export-load-error]"));
+    }
+
+    private static ReviewEvent Event(Guid project) =>
+        new(project, Guid.NewGuid(), Guid.NewGuid(), "W3", MemberReviewState.AwaitingCheck, MemberReviewState.Approved, "ReviewApprove", "u-checker", DateTime.UtcNow);
+
+    /// <summary>The real hub, counting live subscriptions (so a test can see one end with the panel).</summary>
+    private sealed class CountingReviewEvents(IReviewEvents inner) : IReviewEvents
+    {
+        private int _subscribers;
+
+        public int Subscribers => Volatile.Read(ref _subscribers);
+
+        public IDisposable Subscribe(Guid projectId, Action<ReviewEvent> handler)
+        {
+            var inner1 = inner.Subscribe(projectId, handler);
+            Interlocked.Increment(ref _subscribers);
+            return new Handle(() =>
+            {
+                inner1.Dispose();
+                Interlocked.Decrement(ref _subscribers);
+            });
+        }
+
+        public void Publish(ReviewEvent reviewEvent) => inner.Publish(reviewEvent);
+
+        private sealed class Handle(Action dispose) : IDisposable
+        {
+            private Action? _dispose = dispose;
+
+            public void Dispose() => Interlocked.Exchange(ref _dispose, null)?.Invoke();
+        }
     }
 }

@@ -15,7 +15,7 @@ public class ProjectsPageTests : TrussWebTestContext
     {
         var trussId = Guid.NewGuid();
         _projects.Summaries.Add(new ProjectSummary(Guid.NewGuid(), "Cold store", "Client", "J-7", "Town", "B", "SANS 10162-1", Roles.Designer, DateTime.UtcNow,
-            [new TrussStatusRollup(trussId, "RT1", 29, 25, 3, 1, 0, new Dictionary<string, int> { ["Draft"] = 27, ["Approved"] = 2 })]));
+            [new TrussStatusRollup(trussId, "RT1", 29, 25, 3, 1, 0, new Dictionary<string, int> { ["Draft"] = 26, ["Approved"] = 2, ["NotSubmitted"] = 1 })]));
         Services.AddSingleton<IProjectService>(_projects);
         Services.AddSingleton<ICatalogueService, FakeCatalogueService>();
     }
@@ -32,7 +32,9 @@ public class ProjectsPageTests : TrussWebTestContext
         Assert.Contains("3 fail", rollup);
         Assert.Contains("1 not designed", rollup);
         Assert.Contains("of 29 members", rollup);
-        Assert.Contains("2 Approved, 27 Draft", cut.Find("[data-testid=projects-table]").TextContent);
+        // Stored names in words, in workflow order; "Draft" and "NotSubmitted" are the same state (ReviewStateMachine.Parse).
+        Assert.Equal("27 not submitted, 2 approved", cut.Find("[data-testid=truss-review-counts]").TextContent.Trim());
+        Assert.DoesNotContain("Draft", cut.Find("[data-testid=projects-table]").TextContent, StringComparison.Ordinal);
         Assert.Equal($"/projects/{_projects.Summaries[0].Id}", cut.Find("[data-testid=project-link]").GetAttribute("href"));
     }
 

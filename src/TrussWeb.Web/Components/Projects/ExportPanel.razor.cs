@@ -1,12 +1,15 @@
 using Microsoft.AspNetCore.Components;
 using TrussWeb.Services.Contracts;
 using TrussWeb.Services.Exports;
+using TrussWeb.Web.Components.Review;
 
 namespace TrussWeb.Web.Components.Projects;
 
 /// <summary>
 /// Starts exports and follows them: job changes arrive from <see cref="IExportEvents"/> on the job's thread and are
-/// marshalled with <c>InvokeAsync</c>; the subscription is disposed with the component.
+/// marshalled with <c>InvokeAsync</c>. The approval line also follows the project's review changes
+/// (<see cref="IReviewEvents"/>, through <see cref="LiveRefresh.Dispatch"/> so the re-read runs as this page's user).
+/// Both subscriptions are disposed with the component.
 /// </summary>
 public partial class ExportPanel
 {
@@ -16,6 +19,8 @@ public partial class ExportPanel
     private string? _startMessage;
     private bool _starting;
     private IDisposable? _subscription;
+    private IDisposable? _reviewSubscription;
+    private Guid _reviewProjectId;
 
     [Parameter, EditorRequired] public required Guid ProjectId { get; set; }
 
@@ -23,11 +28,48 @@ public partial class ExportPanel
 
     [Inject] private IExportEvents Events { get; set; } = default!;
 
+    [Inject] private IReviewEvents ReviewEvents { get; set; } = default!;
+
     protected override async Task OnParametersSetAsync()
     {
         _subscription?.Dispose();
         _subscription = null;
+        if (_reviewProjectId != ProjectId)
+        {
+            _reviewSubscription?.Dispose();
+            _reviewSubscription = null;
+        }
+
         await LoadAsync();
+    }
+
+    // Review changes are heard only after a render in the browser (never in a prerender) and only by a caller the service let in.
+    protected override void OnAfterRender(bool firstRender)
+    {
+        if (_reviewSubscription is null && _readiness is not null && _loadMessage is null)
+        {
+            _reviewProjectId = ProjectId;
+            _reviewSubscription = ReviewEvents.Subscribe(ProjectId, _ => LiveRefresh.Dispatch(InvokeAsync, async () =>
+            {
+                await LoadReadinessAsync();
+                StateHasChanged();
+            }));
+        }
+    }
+
+    /// <summary>Re-reads only the approval state after a review change (the job list follows its own events).</summary>
+    private async Task LoadReadinessAsync()
+    {
+        var readiness = await Exports.GetReadinessAsync(ProjectId);
+        if (readiness.IsOk)
+        {
+            _readiness = readiness.Value;
+            _loadMessage = null;
+        }
+        else
+        {
+            _loadMessage = readiness.Message ?? "The export area could not be loaded.";
+        }
     }
 
     /// <summary>Reads the approval state; only a caller the service lets in is subscribed to the project's jobs (then the list is read, so no change is missed).</summary>
@@ -122,6 +164,8 @@ public partial class ExportPanel
     {
         _subscription?.Dispose();
         _subscription = null;
+        _reviewSubscription?.Dispose();
+        _reviewSubscription = null;
         GC.SuppressFinalize(this);
     }
 }

@@ -23,6 +23,17 @@ public static class ReviewStateText
 
     public static MemberReviewState Parse(string? stored) => ReviewStateMachine.Parse(stored);
 
+    /// <summary>
+    /// Counts keyed by stored state names (e.g. <c>{"Draft": 27, "Approved": 2}</c>) in words, in workflow order, the way the
+    /// design counts read ("27 not submitted, 2 approved"); names that mean the same state are added together.
+    /// </summary>
+    public static string Counts(IReadOnlyDictionary<string, int> storedCounts)
+    {
+        ArgumentNullException.ThrowIfNull(storedCounts);
+        var byState = storedCounts.GroupBy(kv => Parse(kv.Key)).ToDictionary(g => g.Key, g => g.Sum(kv => kv.Value));
+        return string.Join(", ", Order.Where(s => byState.GetValueOrDefault(s) > 0).Select(s => $"{byState[s]} {ReviewStateMachine.Describe(s)}"));
+    }
+
     public static Color ColorOf(MemberReviewState state) => state switch
     {
         MemberReviewState.AwaitingCheck => Color.Info,
