@@ -1,3 +1,5 @@
+using System.Collections.Concurrent;
+using System.Runtime.CompilerServices;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore.Storage;
 using TrussWeb.Data;
@@ -17,7 +19,8 @@ namespace TrussWeb.Services.Common;
 /// database's single write lock at its start instead of upgrading a read transaction later (which in WAL mode
 /// fails at once with SQLITE_BUSY when another writer committed meanwhile). Waiting writers are held by
 /// busy_timeout (5 s, SqlitePragmaInterceptor) and then by Microsoft.Data.Sqlite's own retry until the command
-/// timeout (30 s).</item>
+/// timeout (30 s). In front of that, an in-process gate per database file makes the waiting writers
+/// first come, first served.</item>
 /// </list>
 /// The caller's row versions are still checked on save (optimistic), so a stale edit of the same row is still a
 /// Conflict. The lock only removes races between saves of different rows of one truss.
@@ -36,15 +39,37 @@ internal static class TrussWriteLock
             return open;
         }
 
-        // SQLite: non-deferred = BEGIN IMMEDIATE (the write lock is taken here). PostgreSQL: READ COMMITTED, so every
-        // statement after the lock below sees what the previous holder committed.
-        var transaction = await db.Database.BeginTransactionAsync(cancellationToken).ConfigureAwait(false);
-        if (db.Database.IsNpgsql())
+        if (!db.Database.IsNpgsql())
         {
-            await db.Database.ExecuteSqlInterpolatedAsync($"SELECT 1 FROM \"Trusses\" WHERE \"Id\" = {trussId} FOR NO KEY UPDATE", cancellationToken)
-                .ConfigureAwait(false);
+            // SQLite's own waiting writers poll (busy handler), so a writer that has just finished often takes the
+            // lock again ahead of ones that waited long. An in-process first-come-first-served gate per database file
+            // in front of BEGIN IMMEDIATE keeps the queue fair (SQLite serves one app process, docs/dev/data.md).
+            var gate = SqliteGates.GetOrAdd(db.Database.GetConnectionString() ?? string.Empty, _ => new SemaphoreSlim(1, 1));
+            if (!await gate.WaitAsync(GateWait, cancellationToken).ConfigureAwait(false))
+            {
+                throw new TimeoutException($"The database stayed busy with other saves for {GateWait.TotalSeconds:0} s; nothing was saved, try again.");
+            }
+
+            var lease = new GateLease(gate);
+            try
+            {
+                // non-deferred = BEGIN IMMEDIATE: the file's write lock is taken here
+                var immediate = await db.Database.BeginTransactionAsync(cancellationToken).ConfigureAwait(false);
+                Leases.AddOrUpdate(db, lease);
+                db.ReleaseOnDispose(lease); // an early return (nothing saved) disposes the context: rolled back, then released
+                return immediate;
+            }
+            catch
+            {
+                lease.Dispose();
+                throw;
+            }
         }
 
+        // PostgreSQL: READ COMMITTED, so every statement after the lock below sees what the previous holder committed.
+        var transaction = await db.Database.BeginTransactionAsync(cancellationToken).ConfigureAwait(false);
+        await db.Database.ExecuteSqlInterpolatedAsync($"SELECT 1 FROM \"Trusses\" WHERE \"Id\" = {trussId} FOR NO KEY UPDATE", cancellationToken)
+            .ConfigureAwait(false);
         return transaction;
     }
 
@@ -58,6 +83,33 @@ internal static class TrussWriteLock
         {
             await transaction.CommitAsync(cancellationToken).ConfigureAwait(false);
             await transaction.DisposeAsync().ConfigureAwait(false);
+        }
+
+        if (Leases.TryGetValue(db, out var lease))
+        {
+            Leases.Remove(db);
+            lease.Dispose();
+        }
+    }
+
+    /// <summary>The longest a SQLite save waits at the in-process gate (Microsoft.Data.Sqlite's command timeout is 30 s per statement).</summary>
+    private static readonly TimeSpan GateWait = TimeSpan.FromSeconds(60);
+
+    private static readonly ConcurrentDictionary<string, SemaphoreSlim> SqliteGates = new(StringComparer.Ordinal);
+
+    private static readonly ConditionalWeakTable<TrussWebDbContext, GateLease> Leases = new();
+
+    /// <summary>One holding of a SQLite gate, released once (on commit or on the context's disposal, whichever is first).</summary>
+    private sealed class GateLease(SemaphoreSlim gate) : IDisposable
+    {
+        private int released;
+
+        public void Dispose()
+        {
+            if (Interlocked.Exchange(ref released, 1) == 0)
+            {
+                gate.Release();
+            }
         }
     }
 }
