@@ -548,8 +548,9 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
             await TrussWriteLock.AcquireAsync(db, owner.TrussId, cancellationToken).ConfigureAwait(false);
         }
 
-        var member = await db.TrussMembers.Include(m => m.Truss).SingleAsync(m => m.Id == memberId, cancellationToken).ConfigureAwait(false);
-        return (member, null, role);
+        // deleted while this step waited for the lock: not found, as if it had never existed
+        var member = await db.TrussMembers.Include(m => m.Truss).SingleOrDefaultAsync(m => m.Id == memberId, cancellationToken).ConfigureAwait(false);
+        return member is null ? (null, ServiceResult<MemberReviewView>.NotFound(NotFoundMessage), role) : (member, null, role);
     }
 
     private static Task<DesignSnapshot?> CurrentSnapshotAsync(TrussWebDbContext db, TrussMember member, CancellationToken cancellationToken) =>
