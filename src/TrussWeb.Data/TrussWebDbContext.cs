@@ -61,6 +61,54 @@ public class TrussWebDbContext : IdentityDbContext<AppUser, IdentityRole, string
     /// <inheritdoc />
     public DbSet<DataProtectionKey> DataProtectionKeys => Set<DataProtectionKey>();
 
+    private List<IDisposable>? releasedOnDispose;
+
+    /// <summary>
+    /// Disposes <paramref name="release"/> when this context is disposed, after the context has rolled back and closed
+    /// any transaction still open (the Services use it to release the in-process part of a truss's write lock).
+    /// </summary>
+    public void ReleaseOnDispose(IDisposable release)
+    {
+        ArgumentNullException.ThrowIfNull(release);
+        (releasedOnDispose ??= []).Add(release);
+    }
+
+    /// <inheritdoc />
+    public override void Dispose()
+    {
+        try
+        {
+            base.Dispose();
+        }
+        finally
+        {
+            ReleaseAll();
+        }
+    }
+
+    /// <inheritdoc />
+    public override async ValueTask DisposeAsync()
+    {
+        try
+        {
+            await base.DisposeAsync().ConfigureAwait(false);
+        }
+        finally
+        {
+            ReleaseAll();
+        }
+    }
+
+    private void ReleaseAll()
+    {
+        var releases = releasedOnDispose;
+        releasedOnDispose = null;
+        foreach (var release in releases ?? [])
+        {
+            release.Dispose();
+        }
+    }
+
     /// <inheritdoc />
     public override int SaveChanges(bool acceptAllChangesOnSuccess)
     {

@@ -33,8 +33,15 @@ public static class LoadRun
     /// <summary>User u's save j sets Kx to a value no other user or save uses (0.6 to 0.99).</summary>
     public static double KxOf(int user, int save) => Math.Round(0.6 + user * 0.01 + (save + 1) * 1e-4, 4);
 
-    public static async Task<IReadOnlyList<UserOutcome>> RunAsync(StorageHost host, int users, int saves, TimeSpan timeLimit, CancellationToken cancellationToken = default)
+    public static Task<IReadOnlyList<UserOutcome>> RunAsync(StorageHost host, int users, int saves, TimeSpan timeLimit, CancellationToken cancellationToken = default) =>
+        RunAsync([host], users, saves, timeLimit, cancellationToken);
+
+    /// <summary>As above, with user u served by <c>hosts[u % hosts.Count]</c> (app instances over one database).</summary>
+    public static async Task<IReadOnlyList<UserOutcome>> RunAsync(IReadOnlyList<StorageHost> hosts, int users, int saves, TimeSpan timeLimit,
+        CancellationToken cancellationToken = default)
     {
+        ArgumentNullException.ThrowIfNull(hosts);
+        var host = hosts[0];
         using var limit = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
         limit.CancelAfter(timeLimit);
         var ct = limit.Token;
@@ -55,7 +62,7 @@ public static class LoadRun
         }
 
         using var start = new SemaphoreSlim(0, users);
-        var tasks = Enumerable.Range(0, users).Select(u => Task.Run(() => UserAsync(host, callers[u], u, trussId, members[u], saves, start, ct), ct)).ToList();
+        var tasks = Enumerable.Range(0, users).Select(u => Task.Run(() => UserAsync(hosts[u % hosts.Count], callers[u], u, trussId, members[u], saves, start, ct), ct)).ToList();
         start.Release(users);
         return await Task.WhenAll(tasks).WaitAsync(timeLimit + TimeSpan.FromSeconds(30), cancellationToken).ConfigureAwait(false);
     }

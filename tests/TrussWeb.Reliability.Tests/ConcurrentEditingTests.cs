@@ -8,8 +8,9 @@ namespace TrussWeb.Reliability.Tests;
 
 /// <summary>
 /// Many users editing one project at once through the services, in process, on each provider: no lost
-/// update, no deadlock (the run is bounded and must finish), and a race on one member ends in a conflict
-/// for the loser, never a silent overwrite. Correctness only; latency is measured by the harness's load
+/// update, no deadlock (the run is bounded and must finish), no conflict for users of different members
+/// (also across two app instances), and a race on one member ends in a conflict for the loser, never a
+/// silent overwrite. Correctness only; latency is measured by the harness's load
 /// mode (docs/PERFORMANCE.md), never asserted here.
 /// </summary>
 public abstract class ConcurrentEditingTests
@@ -27,17 +28,36 @@ public abstract class ConcurrentEditingTests
     };
 
     [Fact]
-    public async Task Twenty_users_editing_different_members_lose_no_update()
+    public async Task Twenty_users_editing_different_members_get_no_conflict_and_lose_no_update()
     {
         await using var database = await CreateDatabaseAsync();
         await using var host = await StorageHost.StartAsync([], Settings(database));
 
         var outcomes = await LoadRun.RunAsync(host, Users, SavesPerUser, TimeSpan.FromMinutes(5));
 
+        await AssertEveryUserSavedAlone(database, outcomes);
+    }
+
+    [Fact]
+    public async Task Twenty_users_on_two_app_instances_editing_different_members_get_no_conflict_and_lose_no_update()
+    {
+        await using var database = await CreateDatabaseAsync();
+        await using var first = await StorageHost.StartAsync([], Settings(database));
+        await using var second = await StorageHost.StartAsync([], Settings(database)); // a second instance: its own DI, pools and start-up
+
+        var outcomes = await LoadRun.RunAsync([first, second], Users, SavesPerUser, TimeSpan.FromMinutes(5));
+
+        await AssertEveryUserSavedAlone(database, outcomes);
+    }
+
+    /// <summary>Each user's saves all returned Ok at the first attempt (no conflict: the saves queue behind the truss's write lock), and the stored rows hold them.</summary>
+    private static async Task AssertEveryUserSavedAlone(TestDatabase database, IReadOnlyList<UserOutcome> outcomes)
+    {
         var stored = await StoredData.MembersAsync(database);
         Assert.Equal(Users, outcomes.Select(o => o.MemberId).Distinct().Count());
         foreach (var o in outcomes)
         {
+            Assert.Equal(0, o.Conflicts);
             Assert.Equal(SavesPerUser, o.Saves);
             Assert.Equal(LoadRun.KxOf(o.User, SavesPerUser - 1), o.LastAckKx);
             var row = stored[o.MemberId];
@@ -86,8 +106,9 @@ public abstract class ConcurrentEditingTests
         Assert.False(string.IsNullOrWhiteSpace(loser.Message));
         var winnerKx = results[0].IsOk ? 0.71 : 0.83;
         var loserKx = results[0].IsOk ? 0.83 : 0.71;
-        // The conflict names the member and keeps the loser's own value (a race on the truss's snapshot rows alone is retried by the service).
-        var memberConflict = Assert.Single(loser.Conflicts, c => c.EntityType == "TrussMember");
+        // The conflict names only the member (saves queue behind the truss's write lock, so nothing else races) and keeps the loser's own value.
+        var memberConflict = Assert.Single(loser.Conflicts);
+        Assert.Equal("TrussMember", memberConflict.EntityType);
         Assert.Equal(loserKx.ToString("R", System.Globalization.CultureInfo.InvariantCulture), memberConflict.YourValues["Kx"]);
 
         var stored = await StoredData.MembersAsync(database);

@@ -12,7 +12,8 @@ namespace TrussWeb.Services.Common;
 /// <summary>
 /// The shared steps of every truss use case: load the truss with everything it owns, authorize, and
 /// commit (re-design, replace snapshots, write the audit, save in one transaction, turn a lost race
-/// into a Conflict result).
+/// into a Conflict result). A save loads with <see cref="LoadForWriteAsync{T}"/>, which takes the truss's
+/// write lock (<see cref="TrussWriteLock"/>) first, so saves of one truss queue instead of racing.
 /// </summary>
 internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> factory, Authorizer authorizer, TimeProvider clock, IReviewEvents reviewEvents)
 {
@@ -25,7 +26,25 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
     public Task<TrussWebDbContext> CreateAsync(CancellationToken cancellationToken) => factory.CreateDbContextAsync(cancellationToken);
 
     /// <summary>Loads and authorizes; Truss is null when Refusal is set.</summary>
-    public async Task<(Truss? Truss, ServiceResult<T>? Refusal, string? Role)> LoadAsync<T>(TrussWebDbContext db, Guid trussId, string operation, CancellationToken cancellationToken)
+    public Task<(Truss? Truss, ServiceResult<T>? Refusal, string? Role)> LoadAsync<T>(TrussWebDbContext db, Guid trussId, string operation, CancellationToken cancellationToken) =>
+        LoadAsync<T>(db, trussId, operation, forWrite: false, cancellationToken);
+
+    /// <summary>
+    /// Authorizes, then opens the save's transaction and takes the truss's write lock, then loads the truss: every
+    /// save of a truss loads with this. The lock is held until <see cref="CommitAsync{T}"/> commits, or until the
+    /// context is disposed (rolled back: nothing saved). Truss is null when Refusal is set.
+    /// </summary>
+    /// <remarks>
+    /// The design runs inside the lock on purpose: a member's result depends on every row of the truss (forces from
+    /// geometry, loads and the self-weight of every section), so a design computed before the lock, from a state
+    /// another user is about to change, would store a stale snapshot. Designing a truss takes a few milliseconds;
+    /// loading the truss and saving its rows cost about as much, so the lock is held for one save's work.
+    /// </remarks>
+    public Task<(Truss? Truss, ServiceResult<T>? Refusal, string? Role)> LoadForWriteAsync<T>(TrussWebDbContext db, Guid trussId, string operation, CancellationToken cancellationToken) =>
+        LoadAsync<T>(db, trussId, operation, forWrite: true, cancellationToken);
+
+    private async Task<(Truss? Truss, ServiceResult<T>? Refusal, string? Role)> LoadAsync<T>(TrussWebDbContext db, Guid trussId, string operation, bool forWrite,
+        CancellationToken cancellationToken)
     {
         var projectId = await db.Trusses.Where(t => t.Id == trussId).Select(t => (Guid?)t.ProjectId).FirstOrDefaultAsync(cancellationToken).ConfigureAwait(false);
         if (projectId is null)
@@ -37,6 +56,11 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
         if (refusal is not null)
         {
             return (null, refusal, role);
+        }
+
+        if (forWrite)
+        {
+            await TrussWriteLock.AcquireAsync(db, trussId, cancellationToken).ConfigureAwait(false);
         }
 
         var truss = await DesignInputBuilder.LoadTrussAsync(db, trussId, cancellationToken).ConfigureAwait(false);
@@ -68,6 +92,7 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
         try
         {
             await db.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
+            await TrussWriteLock.CommitAsync(db, cancellationToken).ConfigureAwait(false);
         }
         catch (DbUpdateConcurrencyException ex)
         {
@@ -101,30 +126,6 @@ internal sealed class TrussUnitOfWork(IDbContextFactory<TrussWebDbContext> facto
 
         var canEdit = PermissionTable.Allows(AccessLevel.ProjectEdit, Caller.Roles, role);
         return ServiceResult<TrussDetail>.Ok(TrussViews.ToDetail(truss, snapshots, role, canEdit, messages.Select(m => m.ToString()).ToList()));
-    }
-
-    /// <summary>Attempts of one save when it loses races only on the truss's snapshot rows.</summary>
-    public const int SnapshotRaceAttempts = 8;
-
-    /// <summary>
-    /// Every save re-designs the whole truss and replaces its snapshots, so two users saving different rows of one
-    /// truss at once race on the snapshot rows only. Such a lost race is not the caller's conflict: the whole attempt
-    /// (fresh context, the caller's versions checked again) runs again after a short random pause. A conflict on a
-    /// row the caller edited, or one still unresolved after <see cref="SnapshotRaceAttempts"/>, is returned.
-    /// </summary>
-    public static async Task<ServiceResult<T>> RetrySnapshotRacesAsync<T>(Func<Task<ServiceResult<T>>> attempt, CancellationToken cancellationToken)
-    {
-        ArgumentNullException.ThrowIfNull(attempt);
-        for (var i = 1; ; i++)
-        {
-            var result = await attempt().ConfigureAwait(false);
-            if (result.Kind != ResultKind.Conflict || i >= SnapshotRaceAttempts || result.Conflicts.Any(c => c.EntityType != nameof(DesignSnapshot)))
-            {
-                return result;
-            }
-
-            await Task.Delay(Random.Shared.Next(5, 40 * i), cancellationToken).ConfigureAwait(false);
-        }
     }
 
     /// <summary>Sets the version EF compares on save to the one the caller loaded.</summary>

@@ -28,6 +28,13 @@ internal static class DesignRunner
     public static async Task<(Outcome? Outcome, IReadOnlyList<ValidationIssue> Issues, IReadOnlyList<ReviewEvent> ReviewEvents)> DesignAndStageAsync(
         TrussWebDbContext db, Truss truss, ICallerContext caller, TimeProvider clock, CancellationToken cancellationToken)
     {
+        // Snapshots of an existing truss are replaced only under its write lock (TrussWriteLock): otherwise two saves of
+        // different rows of one truss would race on these rows, and one would store a design of a state it never saw.
+        if (db.Entry(truss).State != EntityState.Added && !TrussWriteLock.IsHeld(db))
+        {
+            throw new InvalidOperationException($"Truss {truss.Id}: its snapshots are replaced only under the truss write lock; load it with TrussUnitOfWork.LoadForWriteAsync or take TrussWriteLock.AcquireAsync first.");
+        }
+
         var old = await db.DesignSnapshots.Where(s => s.TrussId == truss.Id).ToListAsync(cancellationToken).ConfigureAwait(false);
         var previous = old.Where(s => s.MemberId is not null).ToDictionary(s => s.MemberId!.Value, s => s.Fingerprint);
         db.DesignSnapshots.RemoveRange(old);

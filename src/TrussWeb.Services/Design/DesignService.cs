@@ -17,7 +17,7 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
     public async Task<ServiceResult<TrussDesignView>> DesignTrussAsync(Guid trussId, CancellationToken cancellationToken = default)
     {
         await using var db = await work.CreateAsync(cancellationToken).ConfigureAwait(false);
-        var (truss, refusal, _) = await work.LoadAsync<TrussDesignView>(db, trussId, Op(nameof(DesignTrussAsync)), cancellationToken).ConfigureAwait(false);
+        var (truss, refusal, _) = await work.LoadForWriteAsync<TrussDesignView>(db, trussId, Op(nameof(DesignTrussAsync)), cancellationToken).ConfigureAwait(false);
         if (refusal is not null)
         {
             return refusal;
@@ -123,7 +123,7 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
     {
         ArgumentNullException.ThrowIfNull(proposal);
         await using var db = await work.CreateAsync(cancellationToken).ConfigureAwait(false);
-        var (truss, refusal, _) = await work.LoadAsync<TrussDesignView>(db, proposal.TrussId, Op(nameof(AcceptSizingAsync)), cancellationToken).ConfigureAwait(false);
+        var (truss, refusal, _) = await work.LoadForWriteAsync<TrussDesignView>(db, proposal.TrussId, Op(nameof(AcceptSizingAsync)), cancellationToken).ConfigureAwait(false);
         if (refusal is not null)
         {
             return refusal;
@@ -180,16 +180,11 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
         return ServiceResult<Done>.Ok(default);
     }
 
-    public Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken = default)
+    public async Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(input);
-        return TrussUnitOfWork.RetrySnapshotRacesAsync(() => UpdateMemberDesignOnceAsync(trussId, memberId, input, cancellationToken), cancellationToken);
-    }
-
-    private async Task<ServiceResult<MemberDesignDetail>> UpdateMemberDesignOnceAsync(Guid trussId, Guid memberId, MemberDesignInput input, CancellationToken cancellationToken)
-    {
         await using var db = await work.CreateAsync(cancellationToken).ConfigureAwait(false);
-        var (truss, refusal, _) = await work.LoadAsync<MemberDesignDetail>(db, trussId, Op(nameof(UpdateMemberDesignAsync)), cancellationToken).ConfigureAwait(false);
+        var (truss, refusal, _) = await work.LoadForWriteAsync<MemberDesignDetail>(db, trussId, Op(nameof(UpdateMemberDesignAsync)), cancellationToken).ConfigureAwait(false);
         if (refusal is not null)
         {
             return refusal;

@@ -107,6 +107,7 @@ internal sealed class ProjectService(IDbContextFactory<TrussWebDbContext> factor
         foreach (var id in trussIds)
         {
             await using var tdb = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
+            await TrussWriteLock.AcquireAsync(tdb, id, cancellationToken).ConfigureAwait(false);
             var truss = await DesignInputBuilder.LoadTrussAsync(tdb, id, cancellationToken).ConfigureAwait(false);
             if (truss is null)
             {
@@ -117,6 +118,7 @@ internal sealed class ProjectService(IDbContextFactory<TrussWebDbContext> factor
             AuditWriter.AddAction(tdb, Caller, clock, projectId, nameof(Truss), id.ToString(), "Designed", newValue: outcome?.TrussSnapshot.Status ?? "NotDesigned",
                 fingerprint: outcome?.TrussSnapshot.Fingerprint);
             await tdb.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
+            await TrussWriteLock.CommitAsync(tdb, cancellationToken).ConfigureAwait(false);
             foreach (var e in events)
             {
                 reviewEvents.Publish(e);

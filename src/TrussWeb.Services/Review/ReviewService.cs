@@ -48,6 +48,7 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
             return refusal;
         }
 
+        await TrussWriteLock.AcquireAsync(db, trussId, cancellationToken).ConfigureAwait(false);
         var members = await db.TrussMembers.Include(m => m.Truss).Where(m => m.TrussId == trussId).OrderBy(m => m.Mark).ToListAsync(cancellationToken).ConfigureAwait(false);
         var skipped = new List<SkippedMember>();
         var submitted = new List<TrussMember>();
@@ -214,7 +215,7 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
     public async Task<ServiceResult<MemberReviewView>> GetMemberReviewAsync(Guid memberId, CancellationToken cancellationToken = default)
     {
         await using var db = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
-        var (member, refusal, role) = await LoadAsync(db, memberId, Op(nameof(GetMemberReviewAsync)), cancellationToken).ConfigureAwait(false);
+        var (member, refusal, role) = await LoadAsync(db, memberId, Op(nameof(GetMemberReviewAsync)), cancellationToken, forWrite: false).ConfigureAwait(false);
         return member is null ? refusal! : ServiceResult<MemberReviewView>.Ok(await ViewAsync(db, member, role, cancellationToken).ConfigureAwait(false));
     }
 
@@ -242,7 +243,7 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
     public async Task<ServiceResult<ChangesSinceApproval>> GetChangesSinceApprovalAsync(Guid memberId, CancellationToken cancellationToken = default)
     {
         await using var db = await factory.CreateDbContextAsync(cancellationToken).ConfigureAwait(false);
-        var (member, refusal, _) = await LoadAsync(db, memberId, Op(nameof(GetChangesSinceApprovalAsync)), cancellationToken).ConfigureAwait(false);
+        var (member, refusal, _) = await LoadAsync(db, memberId, Op(nameof(GetChangesSinceApprovalAsync)), cancellationToken, forWrite: false).ConfigureAwait(false);
         if (member is null)
         {
             return refusal!.As<ChangesSinceApproval>();
@@ -492,6 +493,7 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
         try
         {
             await db.SaveChangesAsync(cancellationToken).ConfigureAwait(false);
+            await TrussWriteLock.CommitAsync(db, cancellationToken).ConfigureAwait(false);
         }
         catch (DbUpdateConcurrencyException ex)
         {
@@ -525,22 +527,30 @@ internal sealed class ReviewService(IDbContextFactory<TrussWebDbContext> factory
     }
 
     private async Task<(TrussMember? Member, ServiceResult<MemberReviewView>? Refusal, string? Role)> LoadAsync(TrussWebDbContext db, Guid memberId, string operation,
-        CancellationToken cancellationToken)
+        CancellationToken cancellationToken, bool forWrite = true)
     {
-        var projectId = await db.TrussMembers.Where(m => m.Id == memberId).Select(m => (Guid?)m.Truss!.ProjectId).FirstOrDefaultAsync(cancellationToken).ConfigureAwait(false);
-        if (projectId is null)
+        var owner = await db.TrussMembers.Where(m => m.Id == memberId).Select(m => new { m.TrussId, m.Truss!.ProjectId }).FirstOrDefaultAsync(cancellationToken).ConfigureAwait(false);
+        if (owner is null)
         {
             return (null, ServiceResult<MemberReviewView>.NotFound(NotFoundMessage), null);
         }
 
-        var (refusal, role) = await authorizer.CheckProjectAsync<MemberReviewView>(db, projectId.Value, operation, cancellationToken).ConfigureAwait(false);
+        var (refusal, role) = await authorizer.CheckProjectAsync<MemberReviewView>(db, owner.ProjectId, operation, cancellationToken).ConfigureAwait(false);
         if (refusal is not null)
         {
             return (null, refusal, role);
         }
 
-        var member = await db.TrussMembers.Include(m => m.Truss).SingleAsync(m => m.Id == memberId, cancellationToken).ConfigureAwait(false);
-        return (member, null, role);
+        if (forWrite)
+        {
+            // A review step writes a member row that design saves also write (designer of record, stale approvals) and
+            // reads the snapshot a save replaces: it queues behind them under the truss's write lock (TrussWriteLock).
+            await TrussWriteLock.AcquireAsync(db, owner.TrussId, cancellationToken).ConfigureAwait(false);
+        }
+
+        // deleted while this step waited for the lock: not found, as if it had never existed
+        var member = await db.TrussMembers.Include(m => m.Truss).SingleOrDefaultAsync(m => m.Id == memberId, cancellationToken).ConfigureAwait(false);
+        return member is null ? (null, ServiceResult<MemberReviewView>.NotFound(NotFoundMessage), role) : (member, null, role);
     }
 
     private static Task<DesignSnapshot?> CurrentSnapshotAsync(TrussWebDbContext db, TrussMember member, CancellationToken cancellationToken) =>

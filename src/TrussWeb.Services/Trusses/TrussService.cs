@@ -538,15 +538,11 @@ internal sealed class TrussService(TrussUnitOfWork work) : ITrussService
     };
 
     /// <summary>Load, authorize, apply the edit (collecting field errors), then re-design and save; nothing is saved when there are errors.</summary>
-    private Task<ServiceResult<TrussDetail>> EditAsync(Guid trussId, string method, CancellationToken cancellationToken,
-        Action<TrussWebDbContext, Truss, List<FieldError>> edit, bool sectionCheck = false, string? auditAction = null) =>
-        TrussUnitOfWork.RetrySnapshotRacesAsync(() => EditOnceAsync(trussId, method, cancellationToken, edit, sectionCheck, auditAction), cancellationToken);
-
-    private async Task<ServiceResult<TrussDetail>> EditOnceAsync(Guid trussId, string method, CancellationToken cancellationToken,
-        Action<TrussWebDbContext, Truss, List<FieldError>> edit, bool sectionCheck, string? auditAction)
+    private async Task<ServiceResult<TrussDetail>> EditAsync(Guid trussId, string method, CancellationToken cancellationToken,
+        Action<TrussWebDbContext, Truss, List<FieldError>> edit, bool sectionCheck = false, string? auditAction = null)
     {
         await using var db = await work.CreateAsync(cancellationToken).ConfigureAwait(false);
-        var (truss, refusal, role) = await work.LoadAsync<TrussDetail>(db, trussId, Op(method), cancellationToken).ConfigureAwait(false);
+        var (truss, refusal, role) = await work.LoadForWriteAsync<TrussDetail>(db, trussId, Op(method), cancellationToken).ConfigureAwait(false);
         if (refusal is not null)
         {
             return refusal;
