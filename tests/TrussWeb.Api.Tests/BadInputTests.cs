@@ -56,6 +56,39 @@ public sealed class BadInputTests(SqliteApp app) : IClassFixture<SqliteApp>
     }
 
     [Fact]
+    public async Task A_null_entry_in_a_list_gets_400_naming_its_index_and_saves_nothing()
+    {
+        // Found by BodyPropertyTests: a null row used to reach the truss service and answer 500.
+        var client = app.WithToken((await app.CreateTokenAsync(Demo.Lead)).Token);
+        var (_, trussId) = await Demo.DemoProjectAsync(client);
+        var before = (await client.GetAsync($"/api/v1/trusses/{trussId}")).Headers.ETag?.Tag;
+        var supports = await (await client.PutRawAsync($"/api/v1/trusses/{trussId}/supports", "[null]")).ProblemAsync(400);
+        Assert.Equal("$[0]", supports.Fields().Single());
+        var combinations = await (await client.PutRawAsync($"/api/v1/trusses/{trussId}/combinations", """{"rows":[{"id":null,"version":0,"name":"x","limitState":"Uls","sortOrder":1,"factors":[]},null],"deleted":[]}""")).ProblemAsync(400);
+        Assert.Equal("$.rows[1]", combinations.Fields().Single());
+        Assert.Equal(before, (await client.GetAsync($"/api/v1/trusses/{trussId}")).Headers.ETag?.Tag);
+    }
+
+    [Fact]
+    public async Task Renaming_a_truss_to_a_name_the_project_already_has_gets_400_naming_the_name()
+    {
+        // Found by BodyPropertyTests: the unique index used to refuse it at commit, as a 500.
+        var client = app.WithToken((await app.CreateTokenAsync(Demo.Lead)).Token);
+        var (projectId, trussId) = await Demo.DemoProjectAsync(client);
+        var created = await client.PostRawAsync($"/api/v1/projects/{projectId}/trusses", """
+            { "name": "Taken name", "type": "PitchedHowe", "spanMm": 12000, "pitchDegrees": 15, "apexHeightMm": null, "heelDepthMm": 300, "panelCount": 8, "spacingMm": 6000, "bottomRestraintEvery": 2 }
+            """);
+        Assert.Equal(System.Net.HttpStatusCode.Created, created.StatusCode);
+        var truss = await client.GetAsync($"/api/v1/trusses/{trussId}");
+        var version = (await truss.JsonAsync()).GetProperty("version").GetInt64();
+        var problem = await (await client.PutRawAsync($"/api/v1/trusses/{trussId}/settings",
+            $$"""{"name":"Taken name","spacingMm":6000,"purlinSpacingMm":1500,"deflectionLimitRatio":250,"connectionAllowanceFraction":0.1,"notes":null,"version":{{version}}}""")).ProblemAsync(400);
+        Assert.Equal("Name", problem.Fields().Single());
+        Assert.Contains("already has a truss named 'Taken name'", problem.GetProperty("detail").GetString(), StringComparison.Ordinal);
+        Assert.Equal(truss.Headers.ETag?.Tag, (await client.GetAsync($"/api/v1/trusses/{trussId}")).Headers.ETag?.Tag);
+    }
+
+    [Fact]
     public async Task Values_beyond_a_limit_carry_the_value_and_the_limit()
     {
         var client = app.WithToken((await app.CreateTokenAsync(Demo.Designer)).Token);

@@ -161,6 +161,12 @@ internal sealed class TrussService(TrussUnitOfWork work) : ITrussService
             {
                 errors.Add(new FieldError(nameof(input.Name), "give the truss a name"));
             }
+            else if (!string.Equals(name, truss.Name, StringComparison.Ordinal)
+                     && db.Trusses.Any(t => t.ProjectId == truss.ProjectId && t.Id != truss.Id && t.Name == name))
+            {
+                // The unique index (project, name) would refuse it at commit as an exception.
+                errors.Add(new FieldError(nameof(input.Name), $"the project already has a truss named '{name}'"));
+            }
 
             Positive(errors, nameof(input.SpacingMm), input.SpacingMm, "mm");
             AtMost(errors, nameof(input.SpacingMm), input.SpacingMm, TrussWeb.Core.Validation.PlausibleRange.MaxLengthMm, "mm");

@@ -92,6 +92,7 @@ public static class ApiExtensions
         ProjectEndpoints.Map(v1);
         TrussEndpoints.Map(v1);
         ReviewEndpoints.Map(v1);
+        ExportJobEndpoints.Map(v1);
         return app;
     }
 

@@ -91,6 +91,12 @@ public static partial class ApiJson
                 [new ApiFieldError(huge.Path, $"must be at most {limitText} in magnitude", huge.Text, limitText)]));
         }
 
+        if (NullInList(buffer.GetBuffer().AsSpan(0, (int)buffer.Length)) is { } nullPath)
+        {
+            return (null, ApiProblems.BadRequest($"{nullPath} is null; a list holds no null entries (leave the entry out instead).",
+                [new ApiFieldError(nullPath, "must not be null (a list holds no null entries)", "null")]));
+        }
+
         try
         {
             var value = JsonSerializer.Deserialize<T>(buffer.GetBuffer().AsSpan(0, (int)buffer.Length), json);
@@ -162,6 +168,59 @@ public static partial class ApiJson
             indexes.Count == 0 ? "$" : indexes[^1] >= 0 ? string.Create(CultureInfo.InvariantCulture, $"[{indexes[^1]}]") : name is null ? string.Empty : "." + name;
 
         static void Advance(List<int> indexes)
+        {
+            if (indexes.Count > 0 && indexes[^1] >= 0)
+            {
+                indexes[^1]++;
+            }
+        }
+    }
+
+    /// <summary>
+    /// The JSON path of the first <c>null</c> that is an element of an array (no API list holds null entries; the
+    /// serializer would pass them on to the services); null when none. Invalid JSON is left to the serializer.
+    /// </summary>
+    public static string? NullInList(ReadOnlySpan<byte> json)
+    {
+        var reader = new Utf8JsonReader(json, new JsonReaderOptions { MaxDepth = 64 });
+        var path = new List<string>();
+        var indexes = new List<int>();
+        string? property = null;
+        try
+        {
+            while (reader.Read())
+            {
+                switch (reader.TokenType)
+                {
+                    case JsonTokenType.PropertyName:
+                        property = reader.GetString();
+                        break;
+                    case JsonTokenType.StartObject or JsonTokenType.StartArray:
+                        path.Add(indexes.Count == 0 ? "$" : indexes[^1] >= 0 ? string.Create(CultureInfo.InvariantCulture, $"[{indexes[^1]}]") : "." + property);
+                        indexes.Add(reader.TokenType == JsonTokenType.StartArray ? 0 : -1);
+                        property = null;
+                        break;
+                    case JsonTokenType.EndObject or JsonTokenType.EndArray:
+                        path.RemoveAt(path.Count - 1);
+                        indexes.RemoveAt(indexes.Count - 1);
+                        Next(indexes);
+                        break;
+                    case JsonTokenType.Null when indexes.Count > 0 && indexes[^1] >= 0:
+                        return string.Concat(path) + string.Create(CultureInfo.InvariantCulture, $"[{indexes[^1]}]");
+                    default:
+                        Next(indexes);
+                        break;
+                }
+            }
+        }
+        catch (JsonException)
+        {
+            return null;
+        }
+
+        return null;
+
+        static void Next(List<int> indexes)
         {
             if (indexes.Count > 0 && indexes[^1] >= 0)
             {

@@ -18,11 +18,15 @@ public class ApiAppFactory(TestDatabase database, int requestsPerWindow = 100_00
 {
     public TestDatabase Database { get; } = database;
 
+    /// <summary>This app's own export folder: the export runner deletes files no live job of its own owns, so apps running side by side must not share one.</summary>
+    public string ExportFolder { get; } = Path.Combine(Path.GetTempPath(), "trussweb-api-exports-" + Guid.NewGuid().ToString("N")[..8]);
+
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
         builder.UseSetting("TrussWeb:Database:Provider", Database.Provider.ToString());
         builder.UseSetting("TrussWeb:Database:ConnectionString", Database.ConnectionString);
         builder.UseSetting(TrussWebStartupOptions.DemoKey, "true");
+        builder.UseSetting("TrussWeb:Exports:Folder", ExportFolder);
         builder.UseSetting("TrussWeb:Api:RequestsPerWindow", requestsPerWindow.ToString(System.Globalization.CultureInfo.InvariantCulture));
         builder.UseSetting("TrussWeb:Api:WindowSeconds", "60");
         builder.UseEnvironment("Production");
@@ -84,5 +88,16 @@ public class ApiAppFactory(TestDatabase database, int requestsPerWindow = 100_00
     {
         await base.DisposeAsync();
         await Database.DisposeAsync();
+        try
+        {
+            if (Directory.Exists(ExportFolder))
+            {
+                Directory.Delete(ExportFolder, recursive: true);
+            }
+        }
+        catch (IOException)
+        {
+            // a file still open; the temp folder is cleaned by the system
+        }
     }
 }

@@ -72,6 +72,8 @@ public static class ApiExamples
         ["WithdrawMember"] = """{ "comment": "Taking it back to change the section" }""",
         ["ApproveMember"] = """{ "comment": "Checked against the record" }""",
         ["ReturnMember"] = """{ "comment": "Please check the out-of-plane length" }""",
+        ["StartExport"] = """{ "kind": "MemberSummary", "format": "Xlsx" }""",
+        ["StartFinalSet"] = """{ "kind": "CalculationBook", "format": "Pdf" }""",
         ["ReassignChecker"] = """{ "checkerUserId": "<user id of another checker>" }""",
     };
 }
