@@ -207,7 +207,7 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
         InRangeOrNull(errors, nameof(o.LengthZMm), o.LengthZMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
         InRangeOrNull(errors, nameof(o.KLuMm), o.KLuMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
         InRangeOrNull(errors, nameof(o.KLvMm), o.KLvMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
-        PositiveOrNull(errors, nameof(o.ConnectorSpacingMm), o.ConnectorSpacingMm, " mm");
+        InRangeOrNull(errors, nameof(o.ConnectorSpacingMm), o.ConnectorSpacingMm, PlausibleRange.MinLengthMm, PlausibleRange.MaxLengthMm, " mm");
         if (o.ConnectorCount is < 0)
         {
             errors.Add(new FieldError(nameof(o.ConnectorCount), $"must be at least 0 (got {o.ConnectorCount})"));
@@ -296,14 +296,6 @@ internal sealed class DesignService(TrussUnitOfWork work) : IDesignService
         "Connectors.Count" => nameof(MemberOverrides.ConnectorCount),
         var other => other,
     }, issue.Message);
-
-    private static void PositiveOrNull(List<FieldError> errors, string field, double? value, string unit)
-    {
-        if (value is { } v && !(v > 0 && double.IsFinite(v)))
-        {
-            errors.Add(new FieldError(field, $"must be greater than 0{unit} or left empty for the default (got {v.ToString(System.Globalization.CultureInfo.InvariantCulture)}{unit})"));
-        }
-    }
 
     private static string Mass(double kg) => $"{kg.ToString("0.0", System.Globalization.CultureInfo.InvariantCulture)} kg";
 

@@ -103,6 +103,26 @@ public sealed class TrussTablePropertyTests(DemoStore store) : IClassFixture<Dem
         }).Check(Runs);
     }
 
+    [Fact]
+    public void A_connector_spacing_below_1_mm_is_refused_naming_the_field_and_nothing_is_saved()
+    {
+        // Regression: the property above once drew the smallest positive double (5E-324 mm) for the spacing of a
+        // double angle; it passed "greater than 0", and the component's KL/r rounded to 0 inside Core.
+        var before = Detail();
+        foreach (var member in before.Members)
+        {
+            var overrides = member.Overrides with { ConnectorSpacingMm = double.Epsilon, ConnectorCount = null };
+            var result = Call<IDesignService, MemberDesignDetail>(d => d.UpdateMemberDesignAsync(store.TrussId, member.Id, new MemberDesignInput(overrides, member.Version)));
+            Assert.Equal(ResultKind.Invalid, result.Kind);
+            var error = Assert.Single(result.Errors);
+            Assert.Equal(nameof(MemberOverrides.ConnectorSpacingMm), error.Field);
+            Assert.Contains("1 mm", error.Message, StringComparison.Ordinal);
+        }
+
+        var after = Detail();
+        Assert.Equal(before.Members.Select(m => (m.Id, m.Version, m.Overrides)), after.Members.Select(m => (m.Id, m.Version, m.Overrides)));
+    }
+
     private TrussDetail Detail()
     {
         var detail = Call<ITrussService, TrussDetail>(t => t.GetAsync(store.TrussId));

@@ -303,6 +303,11 @@ public sealed class Sans10162Standard : IDesignStandard
             {
                 issues.Add(new ValidationIssue("Connectors.Spacing", $"must be greater than 0 mm (got {F(a)} mm)"));
             }
+            else if (a < PlausibleRange.MinLengthMm)
+            {
+                // A positive spacing far below any real connector pitch would make the component slenderness round to 0.
+                issues.Add(new ValidationIssue("Connectors.Spacing", $"must be at least {F(PlausibleRange.MinLengthMm)} mm (got {F(a)} mm)"));
+            }
             else if (double.IsFinite(length) && length > 0 && a > length)
             {
                 issues.Add(new ValidationIssue("Connectors.Spacing", $"spacing a = {F(a)} mm must not exceed the member length L = {F(length)} mm"));

@@ -26,6 +26,8 @@ public class Sans10162StandardTests
         { "fy zero", "Fy", "must be greater than 0 MPa (got 0 MPa)" },
         { "fu below fy", "Fu", "fu = 300 MPa must not be less than fy = 350 MPa" },
         { "spacing zero", "Connectors.Spacing", "must be greater than 0 mm (got 0 mm)" },
+        // The smallest positive double: positive, yet KL/r of the component rounds to 0 (found by the truss-table property test).
+        { "spacing below 1 mm", "Connectors.Spacing", "must be at least 1 mm (got 5E-324 mm)" },
         { "spacing too long", "Connectors.Spacing", "spacing a = 3500 mm must not exceed the member length L = 3000 mm" },
         { "holes too large", "Connection.HoleAllowance", "2 holes × 50 mm = 100 mm must be less than the leg width 88.9 mm" },
         { "block shear Ut", "Connection.BlockShear.Ut", "Ut must lie in (0, 1] (got 1.5)" },
@@ -176,6 +178,7 @@ public class Sans10162StandardTests
             "fy zero" => ac40.Steel(0, 450).Build(),
             "fu below fy" => ac40.Steel(350, 300).Build(),
             "spacing zero" => ac40.Connectors(new ConnectorLayout { Spacing = 0 }).Build(),
+            "spacing below 1 mm" => ac40.Connectors(new ConnectorLayout { Spacing = double.Epsilon }).Build(),
             "spacing too long" => ac40.Connectors(new ConnectorLayout { Spacing = 3500 }).Build(),
             "holes too large" => ac40.Connection(new TensionConnection { Kind = ConnectionKind.Bolted, HolesInCrossSection = 2, HoleAllowance = 50, TransverseBoltLines = 2 }).Build(),
             "block shear Ut" => ac40.Connection(new TensionConnection
