@@ -315,30 +315,7 @@ public abstract partial class ServiceBehaviourTests
         Assert.Empty(Ok(await exports.ListJobsAsync(project.Id)));
     }
 
-    private static List<List<string>> Csv(string text)
-    {
-        var rows = new List<List<string>>();
-        var row = new List<string>();
-        var field = new System.Text.StringBuilder();
-        var quoted = false;
-        for (var i = 0; i < text.Length; i++)
-        {
-            var ch = text[i];
-            if (quoted)
-            {
-                if (ch == '"' && i + 1 < text.Length && text[i + 1] == '"') { field.Append('"'); i++; }
-                else if (ch == '"') { quoted = false; }
-                else { field.Append(ch); }
-            }
-            else if (ch == '"') { quoted = true; }
-            else if (ch == ',') { row.Add(field.ToString()); field.Clear(); }
-            else if (ch == '\r') { }
-            else if (ch == '\n') { row.Add(field.ToString()); field.Clear(); rows.Add(row); row = []; }
-            else if (ch != '\uFEFF') { field.Append(ch); }
-        }
-
-        return rows;
-    }
+    private static IReadOnlyList<IReadOnlyList<string>> Csv(string text) => Rfc4180Csv.Read(text);
 
     private static List<List<string>> Xlsx(byte[] bytes)
     {
