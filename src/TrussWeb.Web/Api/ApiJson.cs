@@ -117,7 +117,19 @@ public static partial class ApiJson
     public const double MaxMagnitude = TrussWeb.Core.Validation.PlausibleRange.MaxForceN;
 
     /// <summary>The first number (with its JSON path) beyond <see cref="MaxMagnitude"/> or beyond the double range; null when none. Invalid JSON is left to the serializer.</summary>
-    public static (string Path, string Text)? LargestNumber(ReadOnlySpan<byte> json)
+    public static (string Path, string Text)? LargestNumber(ReadOnlySpan<byte> json) => FirstOffending(json, nullEntries: false);
+
+    /// <summary>
+    /// The JSON path of the first <c>null</c> that is an element of an array (no API list holds null entries; the
+    /// serializer would pass them on to the services); null when none. Invalid JSON is left to the serializer.
+    /// </summary>
+    public static string? NullInList(ReadOnlySpan<byte> json) => FirstOffending(json, nullEntries: true)?.Path;
+
+    /// <summary>
+    /// One walk over the body keeping the JSON path (<c>$.members[2].kx</c>): the first number out of range, or
+    /// (<paramref name="nullEntries"/>) the first null array element, with its path and text.
+    /// </summary>
+    private static (string Path, string Text)? FirstOffending(ReadOnlySpan<byte> json, bool nullEntries)
     {
         var reader = new Utf8JsonReader(json, new JsonReaderOptions { MaxDepth = 64 });
         var path = new List<string>();
@@ -142,15 +154,16 @@ public static partial class ApiJson
                         indexes.RemoveAt(indexes.Count - 1);
                         Advance(indexes);
                         break;
-                    case JsonTokenType.Number:
+                    case JsonTokenType.Number when !nullEntries:
                         if (!reader.TryGetDouble(out var v) || !double.IsFinite(v) || Math.Abs(v) > MaxMagnitude)
                         {
-                            var text = System.Text.Encoding.UTF8.GetString(reader.ValueSpan);
-                            return (string.Concat(path) + Segment(property, indexes), text);
+                            return (string.Concat(path) + Segment(property, indexes), System.Text.Encoding.UTF8.GetString(reader.ValueSpan));
                         }
 
                         Advance(indexes);
                         break;
+                    case JsonTokenType.Null when nullEntries && indexes.Count > 0 && indexes[^1] >= 0:
+                        return (string.Concat(path) + Segment(property, indexes), "null");
                     default:
                         Advance(indexes);
                         break;
@@ -168,59 +181,6 @@ public static partial class ApiJson
             indexes.Count == 0 ? "$" : indexes[^1] >= 0 ? string.Create(CultureInfo.InvariantCulture, $"[{indexes[^1]}]") : name is null ? string.Empty : "." + name;
 
         static void Advance(List<int> indexes)
-        {
-            if (indexes.Count > 0 && indexes[^1] >= 0)
-            {
-                indexes[^1]++;
-            }
-        }
-    }
-
-    /// <summary>
-    /// The JSON path of the first <c>null</c> that is an element of an array (no API list holds null entries; the
-    /// serializer would pass them on to the services); null when none. Invalid JSON is left to the serializer.
-    /// </summary>
-    public static string? NullInList(ReadOnlySpan<byte> json)
-    {
-        var reader = new Utf8JsonReader(json, new JsonReaderOptions { MaxDepth = 64 });
-        var path = new List<string>();
-        var indexes = new List<int>();
-        string? property = null;
-        try
-        {
-            while (reader.Read())
-            {
-                switch (reader.TokenType)
-                {
-                    case JsonTokenType.PropertyName:
-                        property = reader.GetString();
-                        break;
-                    case JsonTokenType.StartObject or JsonTokenType.StartArray:
-                        path.Add(indexes.Count == 0 ? "$" : indexes[^1] >= 0 ? string.Create(CultureInfo.InvariantCulture, $"[{indexes[^1]}]") : "." + property);
-                        indexes.Add(reader.TokenType == JsonTokenType.StartArray ? 0 : -1);
-                        property = null;
-                        break;
-                    case JsonTokenType.EndObject or JsonTokenType.EndArray:
-                        path.RemoveAt(path.Count - 1);
-                        indexes.RemoveAt(indexes.Count - 1);
-                        Next(indexes);
-                        break;
-                    case JsonTokenType.Null when indexes.Count > 0 && indexes[^1] >= 0:
-                        return string.Concat(path) + string.Create(CultureInfo.InvariantCulture, $"[{indexes[^1]}]");
-                    default:
-                        Next(indexes);
-                        break;
-                }
-            }
-        }
-        catch (JsonException)
-        {
-            return null;
-        }
-
-        return null;
-
-        static void Next(List<int> indexes)
         {
             if (indexes.Count > 0 && indexes[^1] >= 0)
             {
